@@ -1,0 +1,51 @@
+using Placement.Units;
+
+namespace Placement.Profiles;
+
+/// <summary>
+/// A spherically symmetric mass distribution on [0, R]: density ρ(r), enclosed mass M(r) and its inverse r(M).
+/// This is the contract every sampler and every quality check works from.
+/// </summary>
+/// <remarks>
+/// All lengths, masses and densities are in <see cref="Units"/>. Implementations must be thread-safe for
+/// concurrent reads, must have ρ ≥ 0 on [0, R], M(0) = 0, M(R) = <see cref="TotalMass"/>, and M strictly
+/// increasing wherever ρ &gt; 0 so that <see cref="RadiusOfEnclosedMass(double)"/> is well defined.
+/// </remarks>
+public interface IRadialProfile
+{
+    /// <summary>The units of every quantity this profile returns.</summary>
+    UnitSystem Units { get; }
+
+    /// <summary>Outer radius R, in length units.</summary>
+    double OuterRadius { get; }
+
+    /// <summary>Total mass M(R), in mass units.</summary>
+    double TotalMass { get; }
+
+    /// <summary>A short stable text that identifies the profile's data (a hash), for provenance.</summary>
+    string Fingerprint { get; }
+
+    /// <summary>Density ρ(r) in mass/length³; 0 outside [0, R].</summary>
+    double Density(double r);
+
+    /// <summary>Enclosed mass M(r) = ∫₀ʳ 4πs²ρ(s) ds; 0 for r ≤ 0 and <see cref="TotalMass"/> for r ≥ R.</summary>
+    double EnclosedMass(double r);
+
+    /// <summary>The radius r with M(r) = m, for 0 ≤ m ≤ <see cref="TotalMass"/>.</summary>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="m"/> is outside [0, M(R)].</exception>
+    double RadiusOfEnclosedMass(double m);
+
+    /// <summary>Batch form of <see cref="Density(double)"/>; implementations may override for speed.</summary>
+    void Density(ReadOnlySpan<double> r, Span<double> rho)
+    {
+        if (rho.Length < r.Length) throw new ArgumentException("Output span is shorter than the input.", nameof(rho));
+        for (int i = 0; i < r.Length; i++) rho[i] = Density(r[i]);
+    }
+
+    /// <summary>Batch form of <see cref="RadiusOfEnclosedMass(double)"/>; implementations may override for speed.</summary>
+    void RadiusOfEnclosedMass(ReadOnlySpan<double> m, Span<double> r)
+    {
+        if (r.Length < m.Length) throw new ArgumentException("Output span is shorter than the input.", nameof(r));
+        for (int i = 0; i < m.Length; i++) r[i] = RadiusOfEnclosedMass(m[i]);
+    }
+}
