@@ -1,0 +1,14 @@
+using System.Text.Json;
+
+namespace Placement.Cli;
+
+/// <summary>The JSON settings every command uses for <c>--json</c> output.</summary>
+internal static class CliJson
+{
+    public static JsonSerializerOptions Options { get; } = new()
+    {
+        WriteIndented = true,
+        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.AllowNamedFloatingPointLiterals,
+    };
+}

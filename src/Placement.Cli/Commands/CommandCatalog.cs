@@ -1,0 +1,12 @@
+using System.CommandLine;
+
+namespace Placement.Cli.Commands;
+
+/// <summary>The list of sub-commands of the tool, in the order <c>--help</c> shows them.</summary>
+internal static class CommandCatalog
+{
+    public static IEnumerable<Command> Create(CliContext context)
+    {
+        yield return KernelsCommand.Create(context);
+    }
+}
