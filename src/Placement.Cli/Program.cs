@@ -1,6 +1,8 @@
+using Placement.Commands;
+
 namespace Placement.Cli;
 
-/// <summary>Process entry point of the <c>placement</c> tool.</summary>
+/// <summary>Process entry point of the <c>placement</c> tool: the whole command set lives in Placement.Commands.</summary>
 public static class Program
 {
     /// <summary>Runs the tool with the process's standard streams.</summary>

@@ -1,4 +1,6 @@
-namespace Placement.Cli.Tests;
+using Placement.Commands;
+
+namespace Placement.Commands.Tests;
 
 /// <summary>Runs the tool in process and captures what it prints.</summary>
 internal static class CliRunner

@@ -1,6 +1,7 @@
 using System.Text.Json;
+using Placement.Commands;
 
-namespace Placement.Cli.Tests;
+namespace Placement.Commands.Tests;
 
 public class GeneralCliTests
 {

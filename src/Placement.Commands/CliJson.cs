@@ -1,6 +1,6 @@
 using System.Text.Json;
 
-namespace Placement.Cli;
+namespace Placement.Commands;
 
 /// <summary>The JSON settings every command uses for <c>--json</c> output.</summary>
 internal static class CliJson

@@ -1,6 +1,6 @@
 using System.CommandLine;
 
-namespace Placement.Cli.Commands;
+namespace Placement.Commands.Verbs;
 
 /// <summary>The list of sub-commands of the tool, in the order <c>--help</c> shows them.</summary>
 internal static class CommandCatalog

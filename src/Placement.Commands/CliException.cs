@@ -1,4 +1,4 @@
-namespace Placement.Cli;
+namespace Placement.Commands;
 
 /// <summary>An error the tool reports as one clear line with a specific exit code.</summary>
 public sealed class CliException : Exception

@@ -1,7 +1,7 @@
 using System.CommandLine;
-using Placement.Cli.Commands;
+using Placement.Commands.Verbs;
 
-namespace Placement.Cli;
+namespace Placement.Commands;
 
 /// <summary>Builds the <c>placement</c> command tree and runs it; the whole tool is one call to <see cref="Run"/>.</summary>
 public static class CliApp

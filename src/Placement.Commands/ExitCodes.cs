@@ -1,4 +1,4 @@
-namespace Placement.Cli;
+namespace Placement.Commands;
 
 /// <summary>Process exit codes of the <c>placement</c> tool (documented in <c>placement --help</c> and the README).</summary>
 public static class ExitCodes

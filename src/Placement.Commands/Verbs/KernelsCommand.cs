@@ -4,7 +4,7 @@ using System.Text.Json;
 using Placement.Sph;
 using Spectre.Console;
 
-namespace Placement.Cli.Commands;
+namespace Placement.Commands.Verbs;
 
 /// <summary><c>placement kernels</c>: lists the SPH kernels the density check can use.</summary>
 internal static class KernelsCommand

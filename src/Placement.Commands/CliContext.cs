@@ -1,6 +1,6 @@
 using Spectre.Console;
 
-namespace Placement.Cli;
+namespace Placement.Commands;
 
 /// <summary>
 /// Where a command writes: standard output and error, whether the user asked for quiet or JSON output, and
