@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Reflection;
 using Placement.Commands.Verbs;
 
 namespace Placement.Commands;
@@ -33,10 +34,18 @@ public static class CliApp
     }
 
     /// <summary>Parses <paramref name="args"/>, runs the chosen command and returns its exit code.</summary>
-    public static int Run(string[] args, TextWriter output, TextWriter error, bool? interactive = null)
+    /// <param name="args">Command-line arguments.</param>
+    /// <param name="output">Standard output.</param>
+    /// <param name="error">Standard error.</param>
+    /// <param name="interactive">Whether output is a terminal; detected when null.</param>
+    /// <param name="plugins">Assemblies whose public samplers and writers join the built-in ones (the MSBuild SDK passes the user's project).</param>
+    public static int Run(string[] args, TextWriter output, TextWriter error, bool? interactive = null, IReadOnlyList<Assembly>? plugins = null)
     {
         ArgumentNullException.ThrowIfNull(args);
-        var context = new CliContext(output, error, interactive ?? (!Console.IsOutputRedirected && Environment.GetEnvironmentVariable("CI") != "true"));
+        var context = new CliContext(output, error, interactive ?? (!Console.IsOutputRedirected && Environment.GetEnvironmentVariable("CI") != "true"))
+        {
+            Plugins = plugins ?? [],
+        };
         var root = Build(context);
         var parse = root.Parse(args);
         context.Quiet = parse.GetValue(QuietOption);

@@ -25,6 +25,9 @@ public sealed class CliContext
     /// <summary>True when standard output is a terminal (progress bars and colours allowed).</summary>
     public bool Interactive { get; }
 
+    /// <summary>Assemblies that contribute samplers and writers next to the built-in ones.</summary>
+    public IReadOnlyList<System.Reflection.Assembly> Plugins { get; init; } = [];
+
     /// <summary>Suppress progress and informational lines.</summary>
     public bool Quiet { get; set; }
 
