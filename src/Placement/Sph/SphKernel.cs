@@ -99,6 +99,38 @@ public sealed class SphKernel
         }
     }
 
+    /// <summary>The derivative dw/dq of the kernel shape for q ≥ 0 (0 for q ≥ 1).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public double ShapeDerivative(double q)
+    {
+        if (q >= 1.0) return 0.0;
+        double a = 1.0 - q;
+        switch (Kind)
+        {
+            case SphKernelKind.CubicSpline:
+                {
+                    double d = -3.0 * a * a;
+                    if (q < 0.5) { double b = 0.5 - q; d += 12.0 * b * b; }
+                    return d;
+                }
+            case SphKernelKind.QuinticSpline:
+                {
+                    double a2 = a * a;
+                    double d = -5.0 * a2 * a2;
+                    if (q < 2.0 / 3.0) { double b = 2.0 / 3.0 - q; double b2 = b * b; d += 30.0 * b2 * b2; }
+                    if (q < 1.0 / 3.0) { double c = 1.0 / 3.0 - q; double c2 = c * c; d -= 75.0 * c2 * c2; }
+                    return d;
+                }
+            case SphKernelKind.WendlandC2:
+                return -20.0 * q * a * a * a;
+            default:
+                {
+                    double a2 = a * a;
+                    return -56.0 / 3.0 * q * (1.0 + 5.0 * q) * a2 * a2 * a;
+                }
+        }
+    }
+
     /// <summary>W(r, H) = C/H³ w(r/H), in 1/length³ of whatever length unit r and H share.</summary>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="support"/> is not positive.</exception>
     public double Value(double r, double support)
