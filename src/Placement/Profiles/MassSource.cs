@@ -9,7 +9,8 @@ public enum MassSource
     /// <summary>
     /// M(r) reproduces the tabulated masses exactly at every row: the interpolated density of each interval between rows
     /// is multiplied by (tabulated mass of the interval)/(integrated mass of the interval). Density then jumps at rows by
-    /// the local mismatch, which <see cref="MassConsistency"/> reports.
+    /// the local mismatch, which <see cref="MassConsistency"/> reports. Intervals whose tabulated mass is below 1e-12 of
+    /// the total (unresolved by the table's precision) keep the integrated density.
     /// </summary>
     Tabulated,
 }

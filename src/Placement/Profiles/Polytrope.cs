@@ -110,7 +110,7 @@ public sealed class Polytrope : IRadialProfile
     {
         if (!(r > 0)) return 0;
         if (r >= OuterRadius) return TotalMass;
-        return _massScale * Solution.Mu(r * _xiScale);
+        return Math.Min(TotalMass, _massScale * Solution.Mu(r * _xiScale));
     }
 
     /// <inheritdoc />

@@ -48,8 +48,11 @@ internal static class ProfileTableChecks
             if (!double.IsFinite(mass[i])) return new TableProblem(i, "mass", mass[i], "enclosed mass is not finite");
             if (mass[i] < 0) return new TableProblem(i, "mass", mass[i], "enclosed mass is negative");
             if (radius[i] == 0 && mass[i] != 0) return new TableProblem(i, "mass", mass[i], "enclosed mass at r = 0 must be 0");
-            if (i > 0 && radius[i] > radius[i - 1] && !(mass[i] > mass[i - 1]))
-                return new TableProblem(i, "mass", mass[i], "enclosed mass does not increase outward");
+            // Non-decreasing only: far out in a steep envelope successive masses can be equal to the table's precision.
+            if (i > 0 && mass[i] < mass[i - 1])
+                return new TableProblem(i, "mass", mass[i], "enclosed mass decreases outward");
+            if (i > 0 && radius[i] == radius[i - 1] && mass[i] != mass[i - 1])
+                return new TableProblem(i, "mass", mass[i], "enclosed mass differs between the two rows of a density step");
         }
         return null;
     }

@@ -219,7 +219,9 @@ public sealed partial class TabulatedProfile
         {
             double mTab0 = TabulatedMassAt(c.R0[k]), mTab1 = TabulatedMassAt(c.R1[k]);
             double mInt0 = EnclosedMassUnchecked(c.R0[k], total), mInt1 = c.R1[k] >= _r[^1] ? total : EnclosedMassUnchecked(c.R1[k], total);
-            c.Scale[k] = (mTab1 - mTab0) / (mInt1 - mInt0);
+            // An interval whose tabulated mass is not resolved by the table's precision keeps the integrated density.
+            double dTab = mTab1 - mTab0, dInt = mInt1 - mInt0;
+            c.Scale[k] = dTab > 1e-12 * _tabulatedMass![^1] && dInt > 0 ? dTab / dInt : 1;
         }
     }
 

@@ -158,7 +158,7 @@ public sealed partial class TabulatedProfile : IRadialProfile
     public double Quantity(string name, double r) =>
         TryQuantity(name, r, out double v) ? v : throw new KeyNotFoundException($"The profile carries no quantity '{name}'.");
 
-    /// <summary>Asserts the internal invariants (contiguous segments, positive panel masses, M(R) = total, r(M(r)) = r at panel ends).</summary>
+    /// <summary>Asserts the internal invariants (contiguous segments, non-decreasing cumulative mass, M(R) = total, r(M(r)) = r at panel ends).</summary>
     /// <exception cref="InvalidOperationException">An invariant is broken.</exception>
     public void CheckValidity()
     {
@@ -166,9 +166,11 @@ public sealed partial class TabulatedProfile : IRadialProfile
             if (_density.R0[k] != _density.R1[k - 1]) throw new InvalidOperationException($"Segment {k} does not start where segment {k - 1} ends.");
         for (int p = 0; p + 1 < _pM0.Length; p++)
         {
-            if (!(_pM0[p + 1] > _pM0[p])) throw new InvalidOperationException($"Panel {p} has non-positive mass.");
+            // Far out in a steep envelope a panel's mass can fall below the rounding of the cumulative mass, so equal
+            // neighbours are legal; the inverse is checked only where the cumulative mass is distinct.
+            if (!(_pM0[p + 1] >= _pM0[p])) throw new InvalidOperationException($"Panel {p} has negative mass.");
             double r = _pR0[p];
-            if (r > 0)
+            if (r > 0 && _pM0[p] > _pM0[p - 1] && _pM0[p + 1] > _pM0[p])
             {
                 double back = RadiusOfEnclosedMass(_pM0[p]);
                 if (Math.Abs(back / r - 1) > 1e-12) throw new InvalidOperationException($"r(M(r)) = {back} at panel start r = {r}.");
