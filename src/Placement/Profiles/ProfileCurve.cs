@@ -8,8 +8,8 @@ namespace Placement.Profiles;
 /// </summary>
 /// <remarks>
 /// <para>Layout (structure of arrays, one entry per segment, segments contiguous and ascending in r; a repeated
-/// node radius is a step and produces no segment): <c>R0, R1</c> segment ends; <c>X0, Hx</c> = ln R0 and
-/// ln R1 − ln R0; <c>Y0, Y1, D0, D1</c> shape coefficients whose meaning depends on <c>Kind</c>; <c>Scale</c>
+/// node radius is a step and produces no segment): <c>R0, R1</c> segment ends; <c>Hx</c> = ln(R1/R0), the
+/// width in the local log coordinate u = ln(r/R0) used by the cubic (local so large radii keep full precision); <c>Y0, Y1, D0, D1</c> shape coefficients whose meaning depends on <c>Kind</c>; <c>Scale</c>
 /// multiplies the value (1 unless the profile renormalises density to tabulated masses).</para>
 /// <para>Kinds: <see cref="LogLog"/>: ln v is the PCHIP cubic in ln r (Y, D = ln v and d ln v/d ln r at the ends);
 /// <see cref="LinLog"/>: v itself is the PCHIP cubic in ln r (used for quantities with zero or negative values);
@@ -22,7 +22,7 @@ internal sealed class ProfileCurve
 {
     public const byte LogLog = 0, LinLog = 1, Centre = 2, SurfacePower = 3, CorePower = 4;
 
-    public double[] R0 = [], R1 = [], X0 = [], Hx = [], Y0 = [], Y1 = [], D0 = [], D1 = [], Scale = [];
+    public double[] R0 = [], R1 = [], Hx = [], Y0 = [], Y1 = [], D0 = [], D1 = [], Scale = [];
     public byte[] Kind = [];
 
     public int Count => Kind.Length;
@@ -66,7 +66,7 @@ internal sealed class ProfileCurve
                 var d = new double[m];
                 for (int i = 0; i < m; i++)
                 {
-                    x[i] = Math.Log(r[j0 + i]);
+                    x[i] = Math.Log(r[j0 + i] / r[j0]); // relative to the zone start: full precision for large radii
                     y[i] = log ? Math.Log(v[j0 + i]) : v[j0 + i];
                 }
                 MonotoneCubic.Slopes(x, y, d);
@@ -88,15 +88,14 @@ internal sealed class ProfileCurve
 
         var c = new ProfileCurve();
         int s = seg.Count;
-        c.R0 = new double[s]; c.R1 = new double[s]; c.X0 = new double[s]; c.Hx = new double[s];
+        c.R0 = new double[s]; c.R1 = new double[s]; c.Hx = new double[s];
         c.Y0 = new double[s]; c.Y1 = new double[s]; c.D0 = new double[s]; c.D1 = new double[s];
         c.Scale = new double[s]; c.Kind = new byte[s];
         for (int i = 0; i < s; i++)
         {
             var g = seg[i];
             c.R0[i] = g.r0; c.R1[i] = g.r1; c.Kind[i] = g.kind;
-            c.X0[i] = g.r0 > 0 ? Math.Log(g.r0) : double.NegativeInfinity;
-            c.Hx[i] = g.r0 > 0 ? Math.Log(g.r1) - c.X0[i] : double.PositiveInfinity;
+            c.Hx[i] = g.r0 > 0 ? Math.Log(g.r1 / g.r0) : double.PositiveInfinity;
             c.Y0[i] = g.y0; c.Y1[i] = g.y1; c.D0[i] = g.d0; c.D1[i] = g.d1; c.Scale[i] = 1;
         }
         return c;
@@ -119,12 +118,13 @@ internal sealed class ProfileCurve
         {
             case LogLog:
                 {
-                    double t = (Math.Log(r) - X0[k]) / Hx[k];
+                    // ln(r/R0) rather than ln r − ln R0: keeps full relative precision when r is large (cgs radii).
+                    double t = Math.Log(r / R0[k]) / Hx[k];
                     return Scale[k] * Math.Exp(MonotoneCubic.Hermite(t, Hx[k], Y0[k], Y1[k], D0[k], D1[k]));
                 }
             case LinLog:
                 {
-                    double t = (Math.Log(r) - X0[k]) / Hx[k];
+                    double t = Math.Log(r / R0[k]) / Hx[k];
                     return Scale[k] * MonotoneCubic.Hermite(t, Hx[k], Y0[k], Y1[k], D0[k], D1[k]);
                 }
             case Centre:

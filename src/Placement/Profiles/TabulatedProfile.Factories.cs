@@ -109,9 +109,10 @@ public sealed partial class TabulatedProfile
                 }
             default:
                 {
-                    double x0 = c.X0[k], h = c.Hx[k], d0 = c.D0[k], d1 = c.D1[k];
-                    return AdaptiveQuadrature.Integrate(
-                        x => Math.Exp(x - MonotoneCubic.Hermite((x - x0) / h, h, y0, y1, d0, d1)), x0, x0 + h).Value;
+                    // ∫ dm/ρ = m0 ∫ exp(u − y(u)) du with u = ln(m/m0) local to the interval (full precision for large m).
+                    double m0 = c.R0[k], h = c.Hx[k], d0 = c.D0[k], d1 = c.D1[k];
+                    return m0 * AdaptiveQuadrature.Integrate(
+                        u => Math.Exp(u - MonotoneCubic.Hermite(u / h, h, y0, y1, d0, d1)), 0, h).Value;
                 }
         }
     }

@@ -9,9 +9,10 @@ public sealed partial class TabulatedProfile
     private static readonly double[] GlNodes = GaussLegendreRule.Eight.Nodes.ToArray();
     private static readonly double[] GlWeights = GaussLegendreRule.Eight.Weights.ToArray();
 
-    // Mass panels (structure of arrays): start radius, ln of it, width in ln r, cumulative mass at the start
-    // (one extra entry: the total), owning density segment, ln(dM/d ln r) at both ends (PCHIP panels only).
-    private double[] _pR0 = [], _pX0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
+    // Mass panels (structure of arrays): start radius; start and width in u = ln(r/R0) local to the owning segment
+    // (local so that large radii, e.g. 1e11 cm, keep full relative precision); cumulative mass at the start (one extra
+    // entry: the total); owning density segment; ln(dM/du) at both ends (PCHIP panels only).
+    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
     private int[] _pSeg = [];
     private double[] _lnC = [];
 
@@ -47,7 +48,8 @@ public sealed partial class TabulatedProfile
         int k = _pSeg[p];
         double target = m - _pM0[p];
         var c = _density;
-        double lo, hi, x;
+        // Newton variable u = ln(r/base): base = R0 of the segment, or R1 for the centre segment (R0 = 0).
+        double lo, hi, u, rBase;
         switch (c.Kind[k])
         {
             case ProfileCurve.CorePower:
@@ -60,51 +62,54 @@ public sealed partial class TabulatedProfile
                     // ρ lies between the two end densities on [0, r], so r³ is bracketed by 3ΔM/(4π ρ_max) and 3ΔM/(4π ρ_min).
                     double a = c.Scale[k] * Math.Max(c.Y0[k], c.Y1[k]), b = c.Scale[k] * Math.Min(c.Y0[k], c.Y1[k]);
                     double v = 3 * target / (4 * Math.PI);
-                    lo = Math.Log(Math.Min(Math.Cbrt(v / a), c.R1[k]));
-                    hi = b > 0 ? Math.Log(Math.Min(Math.Cbrt(v / b), c.R1[k])) : Math.Log(c.R1[k]);
-                    x = 0.5 * (lo + hi);
+                    rBase = c.R1[k];
+                    lo = Math.Log(Math.Min(Math.Cbrt(v / a) / rBase, 1));
+                    hi = b > 0 ? Math.Log(Math.Min(Math.Cbrt(v / b) / rBase, 1)) : 0;
+                    u = 0.5 * (lo + hi);
                     break;
                 }
             case ProfileCurve.SurfacePower:
-                lo = Math.Log(c.R0[k]);
-                hi = Math.Log(c.R1[k]);
-                x = lo + (hi - lo) * target / (_pM0[p + 1] - _pM0[p]);
+                rBase = c.R0[k];
+                lo = 0;
+                hi = Math.Log(c.R1[k] / rBase);
+                u = hi * target / (_pM0[p + 1] - _pM0[p]);
                 break;
             default:
                 {
-                    lo = _pX0[p];
-                    hi = _pX0[p] + _pH[p];
-                    // Cubic Hermite guess of ln r against mass with the exact end slopes d ln r/dM = 1/(dM/d ln r).
+                    rBase = c.R0[k];
+                    lo = _pU0[p];
+                    hi = _pU0[p] + _pH[p];
+                    // Cubic Hermite guess of u against mass with the exact end slopes du/dM = 1/(dM/du).
                     double w = _pM0[p + 1] - _pM0[p];
-                    x = lo + MonotoneCubic.Hermite(target / w, w, 0, _pH[p], Math.Exp(-_pG0[p]), Math.Exp(-_pG1[p]));
+                    u = lo + MonotoneCubic.Hermite(target / w, w, 0, _pH[p], Math.Exp(-_pG0[p]), Math.Exp(-_pG1[p]));
                     break;
                 }
         }
-        if (hi <= lo) return Math.Exp(lo);
+        if (hi <= lo) return rBase * Math.Exp(lo);
         for (int iter = 0; iter < 100; iter++)
         {
-            if (!(x > lo && x < hi)) x = 0.5 * (lo + hi);
-            double r = Math.Exp(x);
-            double f = PanelMass(p, k, r, x) - target;
+            if (!(u > lo && u < hi)) u = 0.5 * (lo + hi);
+            double r = rBase * Math.Exp(u);
+            double f = PanelMass(p, k, r) - target;
             if (f == 0) return r;
-            if (f < 0) lo = x; else hi = x;
-            double slope = 4 * Math.PI * r * r * r * _density.Evaluate(k, r);
-            double next = x - f / slope;
+            if (f < 0) lo = u; else hi = u;
+            double slope = 4 * Math.PI * r * r * r * c.Evaluate(k, r);
+            double next = u - f / slope;
             if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-            if (Math.Abs(next - x) <= 1e-14 || hi - lo <= 4e-16 * Math.Max(1, Math.Abs(x))) return Math.Exp(next);
-            x = next;
+            if (Math.Abs(next - u) <= 1e-14 || hi - lo <= 4e-16 * Math.Max(1, Math.Abs(u))) return rBase * Math.Exp(next);
+            u = next;
         }
-        return Math.Exp(x);
+        return rBase * Math.Exp(u);
     }
 
-    /// <summary>Mass between the start of panel p (of segment k) and r (x = ln r).</summary>
-    private double PanelMass(int p, int k, double r, double x)
+    /// <summary>Mass between the start of panel p (of segment k) and r.</summary>
+    private double PanelMass(int p, int k, double r)
     {
         var c = _density;
         switch (c.Kind[k])
         {
             case ProfileCurve.LogLog:
-                return LogLogMass(k, _pX0[p], x);
+                return LogLogMass(k, _pU0[p], Math.Log(r / c.R0[k]));
             case ProfileCurve.CorePower:
                 {
                     double s = c.D0[k], rr = c.R1[k];
@@ -122,68 +127,68 @@ public sealed partial class TabulatedProfile
         }
     }
 
-    /// <summary>∫ 4π r³ρ d ln r over [xa, xb] inside PCHIP segment k, by the 8-point Gauss–Legendre rule.</summary>
-    private double LogLogMass(int k, double xa, double xb)
+    /// <summary>∫ 4π r³ρ du over [ua, ub] (u = ln(r/R0)) inside PCHIP segment k, by the 8-point Gauss–Legendre rule.</summary>
+    private double LogLogMass(int k, double ua, double ub)
     {
         var c = _density;
-        double half = 0.5 * (xb - xa), mid = 0.5 * (xa + xb), sum = 0;
-        double x0 = c.X0[k], h = c.Hx[k], y0 = c.Y0[k], y1 = c.Y1[k], d0 = c.D0[k], d1 = c.D1[k], lnc = _lnC[k];
+        double half = 0.5 * (ub - ua), mid = 0.5 * (ua + ub), sum = 0;
+        double h = c.Hx[k], y0 = c.Y0[k], y1 = c.Y1[k], d0 = c.D0[k], d1 = c.D1[k], lnc = _lnC[k];
         for (int i = 0; i < GlNodes.Length; i++)
         {
-            double x = mid + half * GlNodes[i];
-            double y = MonotoneCubic.Hermite((x - x0) / h, h, y0, y1, d0, d1);
-            sum += GlWeights[i] * Math.Exp(lnc + 3 * x + y);
+            double u = mid + half * GlNodes[i];
+            double y = MonotoneCubic.Hermite(u / h, h, y0, y1, d0, d1);
+            sum += GlWeights[i] * Math.Exp(lnc + 3 * u + y);
         }
         return sum * half;
     }
 
-    private double LogDmDx(int k, double x)
+    /// <summary>ln(dM/du) at u = ln(r/R0) in PCHIP segment k.</summary>
+    private double LogDmDu(int k, double u)
     {
         var c = _density;
-        return _lnC[k] + 3 * x + MonotoneCubic.Hermite((x - c.X0[k]) / c.Hx[k], c.Hx[k], c.Y0[k], c.Y1[k], c.D0[k], c.D1[k]);
+        return _lnC[k] + 3 * u + MonotoneCubic.Hermite(u / c.Hx[k], c.Hx[k], c.Y0[k], c.Y1[k], c.D0[k], c.D1[k]);
     }
 
     private void BuildPanels()
     {
         var c = _density;
         _lnC = new double[c.Count];
-        var r0 = new List<double>(); var x0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
+        var r0 = new List<double>(); var u0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
         var g0 = new List<double>(); var g1 = new List<double>(); var seg = new List<int>();
         double total = 0;
         for (int k = 0; k < c.Count; k++)
         {
-            _lnC[k] = Math.Log(4 * Math.PI * c.Scale[k]);
+            // dM/du = 4π S r³ρ with r = R0 e^u: the constant part ln(4π S R0³) is folded into one number.
+            _lnC[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Log(4 * Math.PI * c.Scale[k]) + 3 * Math.Log(c.R0[k]) : 0;
             if (c.Kind[k] != ProfileCurve.LogLog)
             {
-                r0.Add(c.R0[k]); x0.Add(c.X0[k]); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
-                total += PanelMassClosed(k, c.R1[k]);
+                r0.Add(c.R0[k]); u0.Add(0); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
+                total += PanelMass(r0.Count - 1, k, c.R1[k]);
                 continue;
             }
-            AddLogPanels(k, c.X0[k], c.X0[k] + c.Hx[k], 40, r0, x0, hw, m0, g0, g1, seg, ref total);
+            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, ref total);
         }
         m0.Add(total);
-        _pR0 = [.. r0]; _pX0 = [.. x0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
+        _pR0 = [.. r0]; _pU0 = [.. u0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
     }
 
-    private double PanelMassClosed(int k, double r) => PanelMass(0, k, r, Math.Log(r));
-
-    private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> x0, List<double> hw,
+    private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> u0, List<double> hw,
         List<double> m0, List<double> g0, List<double> g1, List<int> seg, ref double total)
     {
         double whole = LogLogMass(k, a, b);
         double mid = 0.5 * (a + b);
         double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
-        double ga = LogDmDx(k, a), gb = LogDmDx(k, b);
+        double ga = LogDmDu(k, a), gb = LogDmDu(k, b);
         bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(gb - ga) <= MaxPanelLogVariation;
         if (ok || depth == 0)
         {
-            r0.Add(a == _density.X0[k] ? _density.R0[k] : Math.Exp(a));
-            x0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
+            r0.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a));
+            u0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
             total += whole;
             return;
         }
-        AddLogPanels(k, a, mid, depth - 1, r0, x0, hw, m0, g0, g1, seg, ref total);
-        AddLogPanels(k, mid, b, depth - 1, r0, x0, hw, m0, g0, g1, seg, ref total);
+        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
+        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
     }
 
     private MassConsistency CompareMasses(MassSource source)
@@ -208,7 +213,7 @@ public sealed partial class TabulatedProfile
         if (r >= _r[^1]) return total;
         int p = Array.BinarySearch(_pR0, r);
         if (p < 0) p = ~p - 1;
-        return _pM0[p] + PanelMass(p, _pSeg[p], r, Math.Log(r));
+        return _pM0[p] + PanelMass(p, _pSeg[p], r);
     }
 
     private void RenormaliseToTabulatedMasses()
