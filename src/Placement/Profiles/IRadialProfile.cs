@@ -35,6 +35,21 @@ public interface IRadialProfile
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="m"/> is outside [0, M(R)].</exception>
     double RadiusOfEnclosedMass(double m);
 
+    /// <summary>Extra quantities carried along with density (e.g. pressure), each with its unit; empty by default.</summary>
+    /// <remarks>Added as a default member so existing implementations need not change.</remarks>
+    IReadOnlyList<ProfileQuantity> Quantities => [];
+
+    /// <summary>Value of the extra quantity <paramref name="name"/> at radius r (length units), in the quantity's unit.</summary>
+    /// <param name="name">One of the names in <see cref="Quantities"/> (ordinal comparison).</param>
+    /// <param name="r">Radius in length units; quantities are 0 outside [0, R] by convention.</param>
+    /// <param name="value">The value, or NaN when the profile does not carry the quantity.</param>
+    /// <returns>False when the profile does not carry the quantity.</returns>
+    bool TryQuantity(string name, double r, out double value)
+    {
+        value = double.NaN;
+        return false;
+    }
+
     /// <summary>Batch form of <see cref="Density(double)"/>; implementations may override for speed.</summary>
     void Density(ReadOnlySpan<double> r, Span<double> rho)
     {

@@ -15,8 +15,8 @@ public sealed class UniformSphere : IRadialProfile
     /// <exception cref="ArgumentOutOfRangeException">Mass or radius is not finite and positive.</exception>
     public UniformSphere(double mass, double radius, UnitSystem? units = null)
     {
-        if (!(mass > 0) || !double.IsFinite(mass)) throw new ArgumentOutOfRangeException(nameof(mass), mass, "Mass must be finite and > 0.");
-        if (!(radius > 0) || !double.IsFinite(radius)) throw new ArgumentOutOfRangeException(nameof(radius), radius, "Radius must be finite and > 0.");
+        ProfileGuards.Positive(mass, nameof(mass), "Mass");
+        ProfileGuards.Positive(radius, nameof(radius), "Radius");
         TotalMass = mass;
         OuterRadius = radius;
         Units = units ?? UnitSystem.Dimensionless;

@@ -1,0 +1,241 @@
+using Placement.Numerics;
+
+namespace Placement.Profiles;
+
+public sealed partial class TabulatedProfile
+{
+    private const double PanelTolerance = 1e-14;
+    private const double MaxPanelLogVariation = 2.0;
+    private static readonly double[] GlNodes = GaussLegendreRule.Eight.Nodes.ToArray();
+    private static readonly double[] GlWeights = GaussLegendreRule.Eight.Weights.ToArray();
+
+    // Mass panels (structure of arrays): start radius; start and width in u = ln(r/R0) local to the owning segment
+    // (local so that large radii, e.g. 1e11 cm, keep full relative precision); cumulative mass at the start (one extra
+    // entry: the total); owning density segment; ln(dM/du) at both ends (PCHIP panels only).
+    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
+    private int[] _pSeg = [];
+    private double[] _lnC = [];
+
+    /// <inheritdoc />
+    public double EnclosedMass(double r) => EnclosedMassUnchecked(r, TotalMass);
+
+    /// <inheritdoc />
+    public double RadiusOfEnclosedMass(double m)
+    {
+        ProfileGuards.MassInRange(m, TotalMass, nameof(m));
+        return RadiusOfMass(m);
+    }
+
+    /// <inheritdoc />
+    public void RadiusOfEnclosedMass(ReadOnlySpan<double> m, Span<double> r)
+    {
+        ProfileGuards.SpanLengths(m.Length, r.Length, nameof(r));
+        for (int i = 0; i < m.Length; i++)
+        {
+            ProfileGuards.MassInRange(m[i], TotalMass, nameof(m));
+            r[i] = RadiusOfMass(m[i]);
+        }
+    }
+
+    private double RadiusOfMass(double m)
+    {
+        if (m <= 0) return 0;
+        if (m >= TotalMass) return OuterRadius;
+        int p = Array.BinarySearch(_pM0, m);
+        if (p < 0) p = ~p - 1;
+        if (p >= _pM0.Length - 1) p = _pM0.Length - 2;
+        if (_pM0[p] == m) return _pR0[p];
+        int k = _pSeg[p];
+        double target = m - _pM0[p];
+        var c = _density;
+        // Newton variable u = ln(r/base): base = R0 of the segment, or R1 for the centre segment (R0 = 0).
+        double lo, hi, u, rBase;
+        switch (c.Kind[k])
+        {
+            case ProfileCurve.CorePower:
+                {
+                    double s = c.D0[k], whole = _pM0[p + 1] - _pM0[p];
+                    return c.R1[k] * Math.Pow(target / whole, 1 / (3 + s));
+                }
+            case ProfileCurve.Centre:
+                {
+                    // ρ lies between the two end densities on [0, r], so r³ is bracketed by 3ΔM/(4π ρ_max) and 3ΔM/(4π ρ_min).
+                    double a = c.Scale[k] * Math.Max(c.Y0[k], c.Y1[k]), b = c.Scale[k] * Math.Min(c.Y0[k], c.Y1[k]);
+                    double v = 3 * target / (4 * Math.PI);
+                    rBase = c.R1[k];
+                    lo = Math.Log(Math.Min(Math.Cbrt(v / a) / rBase, 1));
+                    hi = b > 0 ? Math.Log(Math.Min(Math.Cbrt(v / b) / rBase, 1)) : 0;
+                    u = 0.5 * (lo + hi);
+                    break;
+                }
+            case ProfileCurve.SurfacePower:
+                rBase = c.R0[k];
+                lo = 0;
+                hi = Math.Log(c.R1[k] / rBase);
+                u = hi * target / (_pM0[p + 1] - _pM0[p]);
+                break;
+            default:
+                {
+                    rBase = c.R0[k];
+                    lo = _pU0[p];
+                    hi = _pU0[p] + _pH[p];
+                    // Cubic Hermite guess of u against mass with the exact end slopes du/dM = 1/(dM/du).
+                    double w = _pM0[p + 1] - _pM0[p];
+                    u = lo + MonotoneCubic.Hermite(target / w, w, 0, _pH[p], Math.Exp(-_pG0[p]), Math.Exp(-_pG1[p]));
+                    break;
+                }
+        }
+        if (hi <= lo) return rBase * Math.Exp(lo);
+        for (int iter = 0; iter < 100; iter++)
+        {
+            if (!(u > lo && u < hi)) u = 0.5 * (lo + hi);
+            double r = rBase * Math.Exp(u);
+            double f = PanelMass(p, k, r) - target;
+            if (f == 0) return r;
+            if (f < 0) lo = u; else hi = u;
+            double slope = 4 * Math.PI * r * r * r * c.Evaluate(k, r);
+            double next = u - f / slope;
+            if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+            if (Math.Abs(next - u) <= 1e-14 || hi - lo <= 4e-16 * Math.Max(1, Math.Abs(u))) return rBase * Math.Exp(next);
+            u = next;
+        }
+        return rBase * Math.Exp(u);
+    }
+
+    /// <summary>Mass between the start of panel p (of segment k) and r.</summary>
+    private double PanelMass(int p, int k, double r)
+    {
+        var c = _density;
+        switch (c.Kind[k])
+        {
+            case ProfileCurve.LogLog:
+                return LogLogMass(k, _pU0[p], Math.Log(r / c.R0[k]));
+            case ProfileCurve.CorePower:
+                {
+                    double s = c.D0[k], rr = c.R1[k];
+                    return 4 * Math.PI * c.Scale[k] * c.Y0[k] * rr * rr * rr / (3 + s) * Math.Pow(r / rr, 3 + s);
+                }
+            case ProfileCurve.Centre:
+                {
+                    double q = c.D0[k], r3 = r * r * r;
+                    return 4 * Math.PI * c.Scale[k] * (c.Y0[k] * r3 / 3 + (c.Y1[k] - c.Y0[k]) * r3 * Math.Pow(r / c.R1[k], q) / (3 + q));
+                }
+            case ProfileCurve.SurfacePower:
+                return c.Scale[k] * SurfaceShell.Mass(c.R0[k], c.R1[k], c.Y0[k], c.D0[k], r);
+            default:
+                throw new InvalidOperationException("Density segments are never of the linear kind.");
+        }
+    }
+
+    /// <summary>∫ 4π r³ρ du over [ua, ub] (u = ln(r/R0)) inside PCHIP segment k, by the 8-point Gauss–Legendre rule.</summary>
+    private double LogLogMass(int k, double ua, double ub)
+    {
+        var c = _density;
+        double half = 0.5 * (ub - ua), mid = 0.5 * (ua + ub), sum = 0;
+        double h = c.Hx[k], y0 = c.Y0[k], y1 = c.Y1[k], d0 = c.D0[k], d1 = c.D1[k], lnc = _lnC[k];
+        for (int i = 0; i < GlNodes.Length; i++)
+        {
+            double u = mid + half * GlNodes[i];
+            double y = MonotoneCubic.Hermite(u / h, h, y0, y1, d0, d1);
+            sum += GlWeights[i] * Math.Exp(lnc + 3 * u + y);
+        }
+        return sum * half;
+    }
+
+    /// <summary>ln(dM/du) at u = ln(r/R0) in PCHIP segment k.</summary>
+    private double LogDmDu(int k, double u)
+    {
+        var c = _density;
+        return _lnC[k] + 3 * u + MonotoneCubic.Hermite(u / c.Hx[k], c.Hx[k], c.Y0[k], c.Y1[k], c.D0[k], c.D1[k]);
+    }
+
+    private void BuildPanels()
+    {
+        var c = _density;
+        _lnC = new double[c.Count];
+        var r0 = new List<double>(); var u0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
+        var g0 = new List<double>(); var g1 = new List<double>(); var seg = new List<int>();
+        double total = 0;
+        for (int k = 0; k < c.Count; k++)
+        {
+            // dM/du = 4π S r³ρ with r = R0 e^u: the constant part ln(4π S R0³) is folded into one number.
+            _lnC[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Log(4 * Math.PI * c.Scale[k]) + 3 * Math.Log(c.R0[k]) : 0;
+            if (c.Kind[k] != ProfileCurve.LogLog)
+            {
+                r0.Add(c.R0[k]); u0.Add(0); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
+                total += PanelMass(r0.Count - 1, k, c.R1[k]);
+                continue;
+            }
+            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, ref total);
+        }
+        m0.Add(total);
+        _pR0 = [.. r0]; _pU0 = [.. u0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
+    }
+
+    private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> u0, List<double> hw,
+        List<double> m0, List<double> g0, List<double> g1, List<int> seg, ref double total)
+    {
+        double whole = LogLogMass(k, a, b);
+        double mid = 0.5 * (a + b);
+        double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
+        double ga = LogDmDu(k, a), gb = LogDmDu(k, b);
+        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(gb - ga) <= MaxPanelLogVariation;
+        if (ok || depth == 0)
+        {
+            r0.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a));
+            u0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
+            total += whole;
+            return;
+        }
+        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
+        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
+    }
+
+    private MassConsistency CompareMasses(MassSource source)
+    {
+        var tab = _tabulatedMass!;
+        double totalTab = tab[^1], totalInt = _pM0[^1];
+        double maxRel = 0, maxAbs = 0;
+        int row = 0;
+        for (int i = 0; i < _r.Length; i++)
+        {
+            double mi = EnclosedMassUnchecked(_r[i], totalInt);
+            double d = Math.Abs(mi - tab[i]);
+            maxAbs = Math.Max(maxAbs, d);
+            if (tab[i] > 0 && d / tab[i] > maxRel) { maxRel = d / tab[i]; row = i; }
+        }
+        return new MassConsistency(source, maxRel, row, maxAbs / totalTab, totalInt, totalTab);
+    }
+
+    private double EnclosedMassUnchecked(double r, double total)
+    {
+        if (!(r > 0)) return 0;
+        if (r >= _r[^1]) return total;
+        int p = Array.BinarySearch(_pR0, r);
+        if (p < 0) p = ~p - 1;
+        return _pM0[p] + PanelMass(p, _pSeg[p], r);
+    }
+
+    private void RenormaliseToTabulatedMasses()
+    {
+        var c = _density;
+        double total = _pM0[^1];
+        for (int k = 0; k < c.Count; k++)
+        {
+            double mTab0 = TabulatedMassAt(c.R0[k]), mTab1 = TabulatedMassAt(c.R1[k]);
+            double mInt0 = EnclosedMassUnchecked(c.R0[k], total), mInt1 = c.R1[k] >= _r[^1] ? total : EnclosedMassUnchecked(c.R1[k], total);
+            // An interval whose tabulated mass is not resolved by the table's precision keeps the integrated density.
+            double dTab = mTab1 - mTab0, dInt = mInt1 - mInt0;
+            c.Scale[k] = dTab > 1e-12 * _tabulatedMass![^1] && dInt > 0 ? dTab / dInt : 1;
+        }
+    }
+
+    private double TabulatedMassAt(double r)
+    {
+        if (r == 0) return 0;
+        int i = Array.BinarySearch(_r, r);
+        if (i < 0) throw new InvalidOperationException("Segment end is not a row radius.");
+        while (i > 0 && _r[i - 1] == r) i--;
+        return _tabulatedMass![i];
+    }
+}
