@@ -29,12 +29,29 @@ public static class PointSampling
     {
         ArgumentNullException.ThrowIfNull(sampler);
         ArgumentNullException.ThrowIfNull(request);
-        var description = sampler.Describe();
-        var parameters = request.ParametersFor(description);
         var plan = sampler.Plan(request);
         plan.CheckValidity();
-        var profile = request.Profile;
-        var points = new PointSet(plan.Count, profile.Units);
+        var points = new PointSet(plan.Count, request.Profile.Units);
+        Fill(sampler, request, plan, points);
+        return new SamplingResult(points, plan);
+    }
+
+    /// <summary>
+    /// Fills an existing point set from a plan already made by <paramref name="sampler"/> for
+    /// <paramref name="request"/>: lets callers reuse one allocation (fresh memory is slow to touch) and time the
+    /// placement alone. Everything else is as in <see cref="Place"/>.
+    /// </summary>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentException">The point set's count differs from the plan's, or the parameters are not this sampler's.</exception>
+    public static void Fill(IPointSampler sampler, SamplingRequest request, SamplingPlan plan, PointSet points)
+    {
+        ArgumentNullException.ThrowIfNull(sampler);
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(points);
+        if (points.Count != plan.Count)
+            throw new ArgumentException($"The point set holds {points.Count} points; the plan needs {plan.Count}.", nameof(points));
+        var parameters = request.ParametersFor(sampler.Describe());
         var settings = request.Parallel ?? ParallelSettings.Default;
         var batchSettings = plan.Count < settings.MinimumChunk
             ? ParallelSettings.Sequential
@@ -54,9 +71,8 @@ public static class PointSampling
             Sampler = sampler.Name,
             Parameters = texts,
             Seed = request.Seed,
-            ProfileFingerprint = profile.Fingerprint,
+            ProfileFingerprint = request.Profile.Fingerprint,
         };
-        return new SamplingResult(points, plan);
     }
 
     private static void FillBatch(IPointSampler sampler, SamplingRequest request, SamplingPlan plan, int k, PointSet points)

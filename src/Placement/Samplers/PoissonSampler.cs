@@ -1,3 +1,4 @@
+using Placement.Geometry;
 using Placement.Random;
 
 namespace Placement.Samplers;
@@ -55,11 +56,9 @@ public sealed class PoissonSampler : IPointSampler
             profile.RadiusOfEnclosedMass(mass[..n], radius[..n]);
             for (int i = 0; i < n; i++)
             {
-                double z = 1 - 2 * rng.NextDouble();
-                (double sp, double cp) = Math.SinCos(2 * Math.PI * rng.NextDouble());
-                double rho = radius[i] * Math.Sqrt((1 - z) * (1 + z));
-                output.X[s + i] = rho * cp;
-                output.Y[s + i] = rho * sp;
+                var (x, y, z) = UnitSphere.RandomDirection(ref rng);
+                output.X[s + i] = radius[i] * x;
+                output.Y[s + i] = radius[i] * y;
                 output.Z[s + i] = radius[i] * z;
             }
         }

@@ -79,4 +79,24 @@ public class CatalogTests
             }
         }
     }
+
+    [Fact]
+    public void Contract_Guards_RejectBadRequestsAndPlans()
+    {
+        var profile = new UniformSphere(1, 1);
+        Assert.Throws<ArgumentOutOfRangeException>(() => new SamplingRequest(profile, 0));
+        Assert.Throws<ArgumentNullException>(() => new SamplingRequest(null!, 10));
+        // Batches must tile [0, count) in order.
+        Assert.Throws<ArgumentException>(() => new SamplingPlan(10, [new PlannedBatch(0, 4, -1, 0.1, double.NaN), new PlannedBatch(5, 5, -1, 0.1, double.NaN)]));
+        Assert.Throws<ArgumentException>(() => new SamplingPlan(10, [new PlannedBatch(0, 9, -1, 0.1, double.NaN)]));
+        Assert.Throws<ArgumentException>(() => new SamplingPlan(1, [new PlannedBatch(0, 1, -1, double.NaN, double.NaN)]));
+        // Parameters parsed for one sampler cannot drive another.
+        var catalog = SamplerCatalog.CreateDefault();
+        var lattice = catalog.Create("stretched-lattice");
+        var request = new SamplingRequest(profile, 100) { Parameters = catalog.Create("healpix-shells").Describe().Defaults() };
+        Assert.Throws<ArgumentException>(() => PointSampling.Place(lattice, request));
+        // A preallocated point set must match the plan.
+        var plan = lattice.Plan(new SamplingRequest(profile, 100));
+        Assert.Throws<ArgumentException>(() => PointSampling.Fill(lattice, new SamplingRequest(profile, 100), plan, new Placement.Points.PointSet(plan.Count + 1, profile.Units)));
+    }
 }

@@ -32,14 +32,11 @@ public sealed class HealpixShellSampler : ShellSampler
     ];
 
     /// <inheritdoc />
-    protected override void FillShell(SamplingRequest request, ShellLayout layout, int shell, in Rotation3 rotation,
+    protected override void FillShell(ShellPlan plan, int shell, in Rotation3 rotation,
         ref KeyedRandom random, PointSpans output)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(layout);
-        bool rotate = request.ParametersFor(Describe()).GetBoolean(RotateParameter);
-        var r = rotate ? rotation : Rotation3.Identity;
-        int nSide = layout.NSide[shell];
-        HealpixGeometry.WriteSphere(nSide, layout.PointRadius[shell], r, output.X, output.Y, output.Z);
+        ArgumentNullException.ThrowIfNull(plan);
+        var r = plan.Parameters.GetBoolean(RotateParameter) ? rotation : Rotation3.Identity;
+        HealpixGeometry.WriteSphere(plan.Layout.NSide[shell], plan.Layout.PointRadius[shell], r, output.X, output.Y, output.Z);
     }
 }

@@ -3,11 +3,20 @@ namespace Placement.Samplers.Shells;
 /// <summary>A sampling plan for a shell sampler: batch 0 is the central cluster (layer 0), batch k ≥ 1 is shell k.</summary>
 public sealed class ShellPlan : SamplingPlan
 {
-    /// <summary>Creates the plan for <paramref name="layout"/>.</summary>
-    public ShellPlan(ShellLayout layout) : base(CheckNotNull(layout).Count, MakeBatches(layout)) => Layout = layout;
+    /// <summary>Creates the plan for <paramref name="layout"/> with the sampler's parsed <paramref name="parameters"/>.</summary>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    public ShellPlan(ShellLayout layout, SamplerParameterValues parameters) : base(CheckNotNull(layout).Count, MakeBatches(layout))
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        Layout = layout;
+        Parameters = parameters;
+    }
 
     /// <summary>The shells: N_side, boundaries, point radii.</summary>
     public ShellLayout Layout { get; }
+
+    /// <summary>The sampler's parameters, parsed once for all shells.</summary>
+    public SamplerParameterValues Parameters { get; }
 
     private static ShellLayout CheckNotNull(ShellLayout layout)
     {

@@ -46,7 +46,7 @@ public abstract class ShellSampler : IPointSampler
         ArgumentNullException.ThrowIfNull(request);
         var values = request.ParametersFor(Describe());
         var layout = ShellLayout.Build(request.Profile, request.Count, values.GetDouble(AspectParameter));
-        var plan = new ShellPlan(layout);
+        var plan = new ShellPlan(layout, values);
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
             $"{layout.ShellCount} shells of 12 N_side^2 points, N_side {(layout.ShellCount > 0 ? layout.NSide[0] : 0)} (innermost) to {(layout.ShellCount > 0 ? layout.NSide[^1] : 0)} (outermost); central cluster of {layout.CentreCount} point(s); exactly {layout.Count} points of mass {layout.PointMass:G6}."));
         return plan;
@@ -66,20 +66,19 @@ public abstract class ShellSampler : IPointSampler
             FillCentre(layout, rotation, output);
             return;
         }
-        FillShell(request, layout, batch - 1, rotation, ref rng, output);
+        FillShell(shells, batch - 1, rotation, ref rng, output);
     }
 
     /// <summary>
     /// Writes the 12 N_side² points of shell <paramref name="shell"/> (0-based; layer shell + 1) at radius
-    /// <see cref="ShellLayout.PointRadius"/>[shell].
+    /// <see cref="ShellLayout.PointRadius"/>[shell]; called concurrently for different shells.
     /// </summary>
-    /// <param name="request">The request (seed, parameters).</param>
-    /// <param name="layout">The shells.</param>
+    /// <param name="plan">The plan: shells and parsed parameters.</param>
     /// <param name="shell">0-based shell index.</param>
     /// <param name="rotation">The shell's uniform random rotation.</param>
     /// <param name="random">The shell's random stream, already past the rotation's draws.</param>
     /// <param name="output">The shell's coordinate spans.</param>
-    protected abstract void FillShell(SamplingRequest request, ShellLayout layout, int shell, in Rotation3 rotation,
+    protected abstract void FillShell(ShellPlan plan, int shell, in Rotation3 rotation,
         ref KeyedRandom random, PointSpans output);
 
     private static void FillCentre(ShellLayout layout, in Rotation3 rotation, PointSpans output)

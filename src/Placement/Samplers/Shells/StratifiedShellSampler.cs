@@ -24,10 +24,11 @@ public sealed class StratifiedShellSampler : ShellSampler
         "Equal-mass shells with one point jittered uniformly inside each equal-area stratum of the shell (HEALPix ring bands cut into sectors).";
 
     /// <inheritdoc />
-    protected override void FillShell(SamplingRequest request, ShellLayout layout, int shell, in Rotation3 rotation,
+    protected override void FillShell(ShellPlan plan, int shell, in Rotation3 rotation,
         ref KeyedRandom random, PointSpans output)
     {
-        ArgumentNullException.ThrowIfNull(layout);
+        ArgumentNullException.ThrowIfNull(plan);
+        var layout = plan.Layout;
         int nSide = layout.NSide[shell];
         double radius = layout.PointRadius[shell];
         int rings = 4 * nSide - 1;
