@@ -1,0 +1,273 @@
+using System.Globalization;
+using Placement.Profiles;
+
+namespace Placement.Samplers.Shells;
+
+/// <summary>
+/// Concentric equal-mass shells of 12 N_side² points each, plus a small central cluster, chosen from a profile's
+/// enclosed mass so that every shell holds exactly its profile mass and its cells are close to a chosen aspect.
+/// </summary>
+/// <remarks>
+/// <para>Point mass m = M/N for the requested N, which is met exactly: the central cluster holds c = N mod 12 points
+/// (layer 0) and the shells (layers 1 … K) hold 12 Σ N_k² = N − c.</para>
+/// <para>Shell k spans [r_{k−1}, r_k] with M(r_k) = m C_k, C_k the number of points inside r_k, so the points'
+/// enclosed mass equals M(r) at every boundary to within the rounding of r(M). Its points lie at the mass
+/// midpoint radius r(m (C_{k−1} + 6N_k²)).</para>
+/// <para>N_side is chosen shell by shell from the centre outward so that the radial thickness over the tangential
+/// spacing, (r_k − r_{k−1}) / (r_mid √(π/3) / N_k), is closest to the target aspect (1 = cubic cells; from
+/// 4πr²Δr/N = Δr³). Only M(r) and r(M) are used, so steep envelopes, density steps and cusps need no special
+/// handling. The outward pass stops when the remaining mass cannot fill a shell of the target aspect; then the
+/// last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
+/// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
+/// greedy value; a search over nearby integers finds such sums (more parts and wider windows are tried if the
+/// nearest fail; with five or more parts there is no number-theoretic obstruction).</para>
+/// <para>Centre: c = 1 puts one point at the origin; c ≥ 2 puts c points on a sphere at the mass midpoint radius
+/// r(m c/2) of the central ball, in the directions of a spherical Fibonacci set (z_j = 1 − (2j+1)/c,
+/// φ_j = j·π(3 − √5)), turned by the cluster's own random rotation; c = 0 means the first shell starts at r = 0. A single central point
+/// gets the mean density of the central ball as its target density (finite even at a cusp).</para>
+/// </remarks>
+public sealed class ShellLayout
+{
+    private const int SearchBudget = 2_000_000;
+    private const int TailShells = 6;
+
+    private ShellLayout(int count, double pointMass, int centreCount, double centreRadius, double centreOuterRadius,
+        int[] nSide, int[] firstPoint, double[] inner, double[] outer, double[] pointRadius, double[] enclosedCount)
+    {
+        Count = count;
+        PointMass = pointMass;
+        CentreCount = centreCount;
+        CentreRadius = centreRadius;
+        CentreOuterRadius = centreOuterRadius;
+        NSide = nSide;
+        FirstPoint = firstPoint;
+        InnerRadius = inner;
+        OuterRadius = outer;
+        PointRadius = pointRadius;
+        EnclosedCount = enclosedCount;
+    }
+
+    /// <summary>Total number of points N (equals the requested count).</summary>
+    public int Count { get; }
+
+    /// <summary>Mass of every point, M/N, in mass units.</summary>
+    public double PointMass { get; }
+
+    /// <summary>Number of points in the central cluster (layer 0), N mod 12.</summary>
+    public int CentreCount { get; }
+
+    /// <summary>Radius at which the central cluster's points lie (0 when it is one point), length units.</summary>
+    public double CentreRadius { get; }
+
+    /// <summary>Outer radius of the central ball, r(m·CentreCount), length units.</summary>
+    public double CentreOuterRadius { get; }
+
+    /// <summary>Number of shells K (layers 1 … K).</summary>
+    public int ShellCount => NSide.Count;
+
+    /// <summary>N_side of each shell, index 0 … K−1 for layers 1 … K.</summary>
+    public IReadOnlyList<int> NSide { get; }
+
+    /// <summary>Index of each shell's first point in the point set.</summary>
+    public IReadOnlyList<int> FirstPoint { get; }
+
+    /// <summary>Inner boundary radius of each shell, length units.</summary>
+    public IReadOnlyList<double> InnerRadius { get; }
+
+    /// <summary>Outer boundary radius of each shell, length units; the last equals the profile's outer radius.</summary>
+    public IReadOnlyList<double> OuterRadius { get; }
+
+    /// <summary>Radius of each shell's points (the shell's mass midpoint), length units.</summary>
+    public IReadOnlyList<double> PointRadius { get; }
+
+    /// <summary>Number of points inside each shell's outer boundary, C_k (as a double for mass products).</summary>
+    public IReadOnlyList<double> EnclosedCount { get; }
+
+    /// <summary>Points in shell <paramref name="k"/> (0-based), 12 N_side².</summary>
+    public int ShellPointCount(int k) => 12 * NSide[k] * NSide[k];
+
+    /// <summary>
+    /// Radial thickness over tangential spacing of shell <paramref name="k"/>: (r_out − r_in) N_side / (r_pt √(π/3)).
+    /// </summary>
+    public double Aspect(int k) => (OuterRadius[k] - InnerRadius[k]) * NSide[k] / (PointRadius[k] * Math.Sqrt(Math.PI / 3));
+
+    /// <summary>Builds the layout for <paramref name="count"/> points on <paramref name="profile"/>.</summary>
+    /// <param name="profile">Target profile.</param>
+    /// <param name="count">Number of points N ≥ 1.</param>
+    /// <param name="aspect">Target radial thickness over tangential spacing (1 = cubic cells), in [0.05, 20].</param>
+    /// <exception cref="ArgumentOutOfRangeException">N or the aspect is out of range.</exception>
+    public static ShellLayout Build(IRadialProfile profile, int count, double aspect = 1.0)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        ArgumentOutOfRangeException.ThrowIfLessThan(count, 1);
+        if (!(aspect >= 0.05 && aspect <= 20)) throw new ArgumentOutOfRangeException(nameof(aspect), aspect, "Aspect must be in [0.05, 20].");
+        var b = new Builder(profile, count, aspect);
+        return b.Run();
+    }
+
+    /// <summary>
+    /// Asserts the layout's invariants against <paramref name="profile"/>: counts add up, radii increase and stay
+    /// within [0, R], every point radius lies inside its shell, and M(r_k) = m C_k at every boundary within
+    /// <paramref name="relativeTolerance"/> × M.
+    /// </summary>
+    /// <exception cref="InvalidOperationException">An invariant is broken; the message names the shell.</exception>
+    public void CheckValidity(IRadialProfile profile, double relativeTolerance = 1e-10)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        var inv = CultureInfo.InvariantCulture;
+        long next = CentreCount;
+        double previous = CentreOuterRadius;
+        double mTot = profile.TotalMass;
+        for (int k = 0; k < ShellCount; k++)
+        {
+            if (FirstPoint[k] != next) throw new InvalidOperationException(string.Create(inv, $"Shell {k + 1} starts at point {FirstPoint[k]}; expected {next}."));
+            next += ShellPointCount(k);
+            if (EnclosedCount[k] != next) throw new InvalidOperationException(string.Create(inv, $"Shell {k + 1} encloses {EnclosedCount[k]} points; expected {next}."));
+            if (InnerRadius[k] != previous || !(OuterRadius[k] >= InnerRadius[k]))
+                throw new InvalidOperationException(string.Create(inv, $"Shell {k + 1} spans [{InnerRadius[k]}, {OuterRadius[k]}] after a boundary at {previous}."));
+            if (!(PointRadius[k] >= InnerRadius[k] && PointRadius[k] <= OuterRadius[k]))
+                throw new InvalidOperationException(string.Create(inv, $"Shell {k + 1} points at r = {PointRadius[k]} lie outside [{InnerRadius[k]}, {OuterRadius[k]}]."));
+            double err = Math.Abs(profile.EnclosedMass(OuterRadius[k]) - PointMass * EnclosedCount[k]);
+            if (!(err <= relativeTolerance * mTot))
+                throw new InvalidOperationException(string.Create(inv, $"Shell {k + 1}: M(r_out) differs from the points' enclosed mass by {err} (M = {mTot})."));
+            previous = OuterRadius[k];
+        }
+        if (next != Count) throw new InvalidOperationException(string.Create(inv, $"Shells hold {next} points; expected {Count}."));
+        if (ShellCount > 0 && OuterRadius[^1] > profile.OuterRadius * (1 + 1e-14))
+            throw new InvalidOperationException(string.Create(inv, $"Outer shell ends at {OuterRadius[^1]} beyond R = {profile.OuterRadius}."));
+    }
+
+    private sealed class Builder(IRadialProfile profile, int count, double aspect)
+    {
+        private readonly double _m = profile.TotalMass / count;
+
+        public ShellLayout Run()
+        {
+            int c = count % 12;
+            long q = (count - c) / 12;
+            var sides = new List<int>();
+            long enclosed = c;
+            double rIn = RadiusAt(enclosed);
+            while (q > 0)
+            {
+                var (best, capped) = BestNSide(enclosed, rIn, q);
+                if (capped) break; // what is left cannot fill a shell of the target aspect
+                sides.Add(best);
+                enclosed += 12L * best * best;
+                q -= (long)best * best;
+                rIn = RadiusAt(enclosed);
+            }
+            if (q > 0) FinishTail(sides, q);
+            return Assemble(c, sides);
+        }
+
+        private double RadiusAt(double points) =>
+            points <= 0 ? 0.0 : points >= count ? profile.OuterRadius : profile.RadiusOfEnclosedMass(Math.Min(profile.TotalMass, points * _m));
+
+        /// <summary>log(aspect of the shell with this N_side starting at rIn / target aspect).</summary>
+        private double LogAspectError(long enclosed, double rIn, int n)
+        {
+            long shell = 12L * n * n;
+            double rOut = RadiusAt(enclosed + shell);
+            double rMid = RadiusAt(enclosed + shell / 2.0);
+            double spacing = rMid * Math.Sqrt(Math.PI / 3) / n;
+            double ratio = (rOut - rIn) / spacing;
+            return Math.Log(Math.Max(ratio, 1e-300) / aspect);
+        }
+
+        /// <summary>
+        /// The N_side in [1, ⌊√q⌋] whose shell aspect is closest to the target (bisection on the crossing), and
+        /// whether even the largest shell that fits the remaining q is thinner than the target.
+        /// </summary>
+        private (int Best, bool Capped) BestNSide(long enclosed, double rIn, long q)
+        {
+            int hi = (int)Math.Min(SumOfSquares.ISqrt(q), 13_000);
+            if (LogAspectError(enclosed, rIn, hi) < 0) return (hi, true);
+            int lo = 1;
+            if (LogAspectError(enclosed, rIn, lo) >= 0) return (lo, false);
+            while (hi - lo > 1)
+            {
+                int mid = lo + (hi - lo) / 2;
+                if (LogAspectError(enclosed, rIn, mid) >= 0) hi = mid; else lo = mid;
+            }
+            return (Math.Abs(LogAspectError(enclosed, rIn, lo)) <= Math.Abs(LogAspectError(enclosed, rIn, hi)) ? lo : hi, false);
+        }
+
+        /// <summary>
+        /// Makes Σ N² of the outer shells match the remaining q exactly: the last (up to) six greedy shells are
+        /// taken back and, with the remainder either as one more shell (when it is at least about a third of the
+        /// last shell's aspect) or spread over them, re-chosen near their greedy N_side (see the type remarks).
+        /// </summary>
+        private static void FinishTail(List<int> sides, long remainder)
+        {
+            int w = Math.Min(TailShells, sides.Count);
+            var targets = new List<double>();
+            long total = remainder;
+            for (int i = sides.Count - w; i < sides.Count; i++)
+            {
+                targets.Add(sides[i]);
+                total += (long)sides[i] * sides[i];
+            }
+            sides.RemoveRange(sides.Count - w, w);
+            double extra = Math.Sqrt(remainder);
+            if (w == 0 || extra >= 0.7 * targets[^1]) targets.Add(extra);
+            else
+            {
+                double scale = Math.Sqrt((double)total / (total - remainder));
+                for (int i = 0; i < targets.Count; i++) targets[i] *= scale;
+            }
+            double smallest = double.PositiveInfinity;
+            foreach (double t in targets) smallest = Math.Min(smallest, t);
+            int deltaMax = Math.Max(2, (int)Math.Ceiling(0.3 * smallest));
+            for (int delta = 1; delta <= 2 * deltaMax; delta *= 2)
+            {
+                var found = SumOfSquares.NearTargets(total, [.. targets], Math.Min(delta, deltaMax), SearchBudget);
+                if (found is not null)
+                {
+                    sides.AddRange(found);
+                    return;
+                }
+            }
+            // Fallback (tiny counts or number-theoretic bad luck): equal parts, one more shell each round; always
+            // ends, since q ones is a solution.
+            for (int l = Math.Max(1, targets.Count); ; l++)
+            {
+                double a = Math.Sqrt((double)total / l);
+                var equal = new double[l];
+                Array.Fill(equal, a);
+                var found = SumOfSquares.NearTargets(total, equal, (int)Math.Ceiling(a) + 1, SearchBudget);
+                if (found is not null)
+                {
+                    sides.AddRange(found);
+                    return;
+                }
+            }
+        }
+
+        private ShellLayout Assemble(int c, List<int> sides)
+        {
+            int k = sides.Count;
+            var first = new int[k];
+            var inner = new double[k];
+            var outer = new double[k];
+            var pointR = new double[k];
+            var enclosedCount = new double[k];
+            long enclosed = c;
+            double centreOuter = RadiusAt(c);
+            double rIn = centreOuter;
+            for (int s = 0; s < k; s++)
+            {
+                long shell = 12L * sides[s] * sides[s];
+                first[s] = (int)enclosed;
+                inner[s] = rIn;
+                pointR[s] = RadiusAt(enclosed + shell / 2.0);
+                enclosed += shell;
+                outer[s] = RadiusAt(enclosed);
+                enclosedCount[s] = enclosed;
+                rIn = outer[s];
+            }
+            double centreR = c <= 1 ? 0.0 : RadiusAt(c / 2.0);
+            return new ShellLayout(count, _m, c, centreR, centreOuter, [.. sides], first, inner, outer, pointR, enclosedCount);
+        }
+    }
+}
