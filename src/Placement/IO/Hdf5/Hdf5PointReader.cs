@@ -72,14 +72,16 @@ public static class Hdf5PointReader
         int n = (int)count;
 
         var units = ReadUnits(a);
-        var points = new PointSet(n, units) { Provenance = ReadProvenance(path, a) };
+        var provenance = ReadProvenance(path, a);
 
         if (!root.LinkExists(Hdf5Layout.PointsGroup))
             throw new PointFileFormatException(path, $"missing group '/{Hdf5Layout.PointsGroup}'.");
         var group = root.Group(Hdf5Layout.PointsGroup);
         var datasets = new DatasetReader(path, group, n);
 
+        // Positions first: their shape check guards point_count before the point set is allocated.
         var position = datasets.Float64(PointColumnNames.Position, 3);
+        var points = new PointSet(n, units) { Provenance = provenance };
         for (int i = 0, j = 0; i < n; i++, j += 3)
         {
             points.X[i] = position[j];
