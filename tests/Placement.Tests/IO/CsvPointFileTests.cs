@@ -1,6 +1,7 @@
 using System.Globalization;
 using Placement.IO;
 using Placement.IO.Csv;
+using Placement.Parallelism;
 
 namespace Placement.Tests.IO;
 
@@ -50,6 +51,23 @@ public class CsvPointFileTests
             Assert.Equal(velocity[0][i], D(8));
             Assert.Equal(velocity[2][i], D(10));
         }
+    }
+
+    [Fact]
+    public void Csv_BytesAreIdenticalOnOneAndTwoThreads_AcrossWindowAndChunkBoundaries()
+    {
+        var table = TestTables.Make(20_011);
+        byte[] Run(int threads, int window, int chunk)
+        {
+            using var memory = new MemoryStream();
+            CsvPointWriter.WriteTo(table, memory, new ParallelSettings { MaxDegreeOfParallelism = threads, MinimumChunk = chunk }, window);
+            return memory.ToArray();
+        }
+        byte[] reference = Run(1, 1 << 18, 8192);
+        // Windows of 5000 rows and chunks of 700 rows split the rows differently; the bytes must not change.
+        Assert.Equal(reference, Run(2, 5000, 700));
+        Assert.Equal(reference, Run(2, 1 << 18, 8192));
+        Assert.Equal(20_011 + 14, System.Text.Encoding.UTF8.GetString(reference).Count(c => c == '\n'));
     }
 
     [Fact]

@@ -1,5 +1,7 @@
+using System.Buffers;
 using System.Globalization;
 using System.Text;
+using Placement.Parallelism;
 using Placement.Points;
 
 namespace Placement.IO.Csv;
@@ -31,7 +33,11 @@ public static class CsvPointWriter
     }
 
     /// <summary>Writes the CSV text to a stream (no atomicity: callers go through <see cref="Write"/>).</summary>
-    internal static void WriteTo(PointTable table, Stream stream)
+    /// <param name="table">What to write.</param>
+    /// <param name="stream">Destination.</param>
+    /// <param name="settings">Parallelism for row formatting; default: all cores, chunks of ≥ 8192 rows.</param>
+    /// <param name="windowRows">Rows formatted per window (bounds the buffer memory).</param>
+    internal static void WriteTo(PointTable table, Stream stream, ParallelSettings? settings = null, int windowRows = 1 << 18)
     {
         using var writer = new StreamWriter(stream, new UTF8Encoding(false), 1 << 16, leaveOpen: true) { NewLine = "\n" };
         foreach (var (key, value) in FileHeaderLines.For(table, FormatName))
@@ -54,23 +60,55 @@ public static class CsvPointWriter
         writer.Write(string.Join(',', header));
         writer.Write('\n');
 
-        // One reusable row buffer: 7 core fields + extras, at most 32 characters each, plus separators.
-        Span<char> row = new char[(7 + extra.Count) * 34 + 2];
-        for (int i = 0; i < p.Count; i++)
+        writer.Flush();
+        WriteRows(table, extra, stream, settings ?? DefaultSettings, windowRows);
+    }
+
+    /// <summary>
+    /// Formats the rows straight to UTF-8 in windows of <paramref name="windowRows"/> rows; within a window, chunks of
+    /// rows are formatted in parallel (<see cref="ParallelLoop"/>) into pooled buffers and then written in order,
+    /// so the bytes do not depend on the thread count and memory stays bounded.
+    /// </summary>
+    private static void WriteRows(PointTable table, List<double[]> extra, Stream stream, ParallelSettings settings, int windowRows)
+    {
+        PointSet p = table.Points;
+        int n = p.Count;
+        // At most 32 bytes per number (shortest round-trip doubles, 64-bit integers) plus a separator.
+        int rowBytes = (7 + extra.Count) * 33;
+        for (int w0 = 0; w0 < n; w0 += windowRows)
         {
-            int at = 0;
-            Append(row, ref at, table.IdOf(i));
-            Append(row, ref at, p.X[i]);
-            Append(row, ref at, p.Y[i]);
-            Append(row, ref at, p.Z[i]);
-            Append(row, ref at, p.Mass[i]);
-            Append(row, ref at, p.TargetDensity[i]);
-            Append(row, ref at, p.Layer[i]);
-            foreach (var values in extra) Append(row, ref at, values[i]);
-            row[at - 1] = '\n';
-            writer.Write(row[..at]);
+            int count = Math.Min(windowRows, n - w0);
+            int chunk = ParallelLoop.ChunkSize(count, settings.MinimumChunk);
+            var buffers = new byte[(count + chunk - 1) / chunk][];
+            var lengths = new int[buffers.Length];
+            ParallelLoop.For(count, settings, (start, end) =>
+            {
+                var buffer = ArrayPool<byte>.Shared.Rent((end - start) * rowBytes);
+                int at = 0;
+                for (int i = w0 + start; i < w0 + end; i++)
+                {
+                    Append(buffer, ref at, table.IdOf(i));
+                    Append(buffer, ref at, p.X[i]);
+                    Append(buffer, ref at, p.Y[i]);
+                    Append(buffer, ref at, p.Z[i]);
+                    Append(buffer, ref at, p.Mass[i]);
+                    Append(buffer, ref at, p.TargetDensity[i]);
+                    Append(buffer, ref at, p.Layer[i]);
+                    foreach (var values in extra) Append(buffer, ref at, values[i]);
+                    buffer[at - 1] = (byte)'\n';
+                }
+                buffers[start / chunk] = buffer;
+                lengths[start / chunk] = at;
+            });
+            for (int c = 0; c < buffers.Length; c++)
+            {
+                stream.Write(buffers[c], 0, lengths[c]);
+                ArrayPool<byte>.Shared.Return(buffers[c]);
+            }
         }
     }
+
+    private static readonly ParallelSettings DefaultSettings = new() { MinimumChunk = 8192 };
 
     /// <summary>A header cell <c>name [unit]</c>, quoted per RFC 4180 if it holds a comma or quote.</summary>
     private static string Head(string name, string unit)
@@ -81,10 +119,10 @@ public static class CsvPointWriter
             : cell;
     }
 
-    private static void Append<T>(Span<char> row, ref int at, T value) where T : ISpanFormattable
+    private static void Append<T>(byte[] row, ref int at, T value) where T : IUtf8SpanFormattable
     {
-        value.TryFormat(row[at..], out int written, default, CultureInfo.InvariantCulture);
+        value.TryFormat(row.AsSpan(at), out int written, default, CultureInfo.InvariantCulture);
         at += written;
-        row[at++] = ',';
+        row[at++] = (byte)',';
     }
 }
