@@ -7,6 +7,8 @@ internal static class CommandCatalog
 {
     public static IEnumerable<Command> Create(CliContext context)
     {
+        yield return PlaceCommand.Create(context);
+        yield return SamplersCommand.Create(context);
         yield return KernelsCommand.Create(context);
     }
 }
