@@ -27,6 +27,7 @@ public sealed class SamplerCatalog
         c.Register(() => new StratifiedShellSampler());
         c.Register(() => new StretchedLatticeSampler());
         c.Register(() => new PoissonSampler());
+        c.Register(() => new Glass.GlassSampler());
         return c;
     }
 

@@ -100,6 +100,8 @@ public sealed record SamplerParameter
                 double[] q = ParseReals(t, 4) ?? throw Bad(text, "identity, random, or a quaternion w,x,y,z");
                 if (q[0] == 0 && q[1] == 0 && q[2] == 0 && q[3] == 0) throw Bad(text, "a quaternion w,x,y,z that is not all zero");
                 return (UnitQuaternion?)UnitQuaternion.Normalise(q[0], q[1], q[2], q[3]);
+            case SamplerParameterKind.Text:
+                return t;
             default:
                 throw new InvalidOperationException($"Unknown parameter kind {Kind}.");
         }

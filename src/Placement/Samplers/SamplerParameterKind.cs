@@ -20,4 +20,7 @@ public enum SamplerParameterKind
 
     /// <summary>A rotation: <c>identity</c>, <c>random</c> (drawn from the seed), or a quaternion <c>w,x,y,z</c> (normalised).</summary>
     Rotation,
+
+    /// <summary>Free text taken as given after trimming, e.g. a file path (may be empty).</summary>
+    Text,
 }

@@ -50,6 +50,11 @@ public sealed class SamplerParameterValues
         return (v[0], v[1], v[2]);
     }
 
+    /// <summary>A text parameter (e.g. a file path), possibly empty.</summary>
+    /// <exception cref="KeyNotFoundException">No such parameter.</exception>
+    /// <exception cref="InvalidCastException">The parameter is not text.</exception>
+    public string GetText(string name) => (string)Get(name)!;
+
     /// <summary>A rotation parameter: the quaternion given, or null when the user asked for a random one.</summary>
     /// <exception cref="KeyNotFoundException">No such parameter.</exception>
     /// <exception cref="InvalidCastException">The parameter is not a rotation.</exception>
