@@ -150,6 +150,51 @@ print(json.dumps(out))
             Assert.Equal([v[0][i], v[1][i], v[2][i]], vrows[i].EnumerateArray().Select(e => e.GetDouble()));
     }
 
+    [H5pyFact]
+    public void Hdf5_FileWrittenByH5pyFollowingTheDocumentedLayout_IsReadBack()
+    {
+        ExternalTools.Require(ExternalTools.HasH5py, "h5py (" + ExternalTools.Python + ")");
+        using var dir = TestTables.TempDir();
+        string path = dir.File("from-h5py.h5");
+        // Another writer (h5py, Debian python3-h5py) following docs/file-formats.md: integer attributes come out
+        // as int64 and strings as h5py's default variable-length UTF-8.
+        const string script = """
+import h5py, numpy as np, sys, json
+n = 5
+with h5py.File(sys.argv[1], 'w') as f:
+    a = f.attrs
+    a['format'] = 'placement-points'; a['format_version'] = 1; a['point_count'] = n
+    a['unit_system'] = 'cgs'; a['length_unit'] = 'cm'; a['mass_unit'] = 'g'; a['time_unit'] = 's'
+    a['length_unit_in_cm'] = 1.0; a['mass_unit_in_g'] = 1.0; a['time_unit_in_s'] = 1.0
+    a['sampler'] = 'by-hand'; a['parameters'] = json.dumps({'k': 'v'}); a['seed'] = np.uint64(7)
+    a['profile_fingerprint'] = 'none'; a['library_version'] = '0.0.0'
+    g = f.create_group('points')
+    def ds(name, data, units):
+        d = g.create_dataset(name, data=data); d.attrs['units'] = units; d.attrs['cgs_factor'] = 1.0
+    ds('position', np.arange(3 * n, dtype='f8').reshape(n, 3), 'cm')
+    ds('mass', np.full(n, 2.0), 'g')
+    ds('target_density', np.linspace(1, 5, n), 'g/cm^3')
+    ds('layer', np.arange(n, dtype='i4'), '1')
+    ds('id', np.arange(10, 10 + n, dtype='i8'), '1')
+    ds('sph_density', np.linspace(0.5, 4.5, n), 'g/cm^3')
+""";
+        var (code, _, stderr) = ExternalTools.Run(ExternalTools.Python, ["-c", script, path]);
+        Assert.True(code == 0, "h5py failed: " + stderr);
+
+        var table = Hdf5PointReader.Read(path);
+        Assert.Equal(5, table.Count);
+        Assert.Same(UnitSystem.Cgs, table.Points.Units);
+        Assert.Equal([0.0, 3, 6, 9, 12], table.Points.X);
+        Assert.Equal([2.0, 5, 8, 11, 14], table.Points.Z);
+        Assert.Equal([10L, 11, 12, 13, 14], table.Ids!);
+        Assert.Equal(7UL, table.Points.Provenance.Seed);
+        Assert.Equal("v", table.Points.Provenance.Parameters["k"]);
+        var sph = table.Find("sph_density");
+        Assert.NotNull(sph);
+        Assert.Equal("g/cm^3", sph.Unit);
+        Assert.Equal([0.5, 1.5, 2.5, 3.5, 4.5], sph.Components[0]);
+    }
+
     [H5DumpFact]
     public void Hdf5_H5dumpHeader_ShowsTheDocumentedLayout()
     {
