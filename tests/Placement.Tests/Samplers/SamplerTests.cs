@@ -56,12 +56,9 @@ public class SamplerTests
             {
                 var result = Place(name, profile, n);
                 var p = result.Points;
-                p.CheckValidity();
-                result.Plan.CheckValidity();
-                // Equal masses M/N summed N times: relative rounding ≤ N·ε, far below 1e-12.
-                Assert.Equal(profile.TotalMass, p.TotalMass(), profile.TotalMass * 1e-12);
-                for (int i = 0; i < p.Count; i++)
-                    Assert.True(p.Radius(i) <= profile.OuterRadius * (1 + 1e-12), $"{name} n={n}: point {i} at r = {p.Radius(i)}");
+                // Equal masses M/N summed N times (compensated): relative rounding far below 1e-12; radii ≤ R;
+                // planned masses and layers; shell boundary masses for shell plans.
+                result.CheckValidity(profile, 1e-12);
                 if (name != "stretched-lattice") Assert.Equal(n, p.Count);
                 Assert.Equal(name, p.Provenance.Sampler);
                 Assert.Equal(profile.Fingerprint, p.Provenance.ProfileFingerprint);
@@ -286,7 +283,9 @@ public class SamplerTests
     public void MeshGeneratorMode_RecordsModeAndKeepsExactMass()
     {
         var profile = TestProfiles.Plummer();
-        var p = Place("healpix-shells", profile, 1000, mode: SamplingMode.MeshGenerators).Points;
+        var result = Place("healpix-shells", profile, 1000, mode: SamplingMode.MeshGenerators);
+        result.CheckValidity(profile);
+        var p = result.Points;
         Assert.Equal("mesh-generators", p.Provenance.Parameters["mode"]);
         Assert.Equal("1000", p.Provenance.Parameters["requested-count"]);
         Assert.Equal("1", p.Provenance.Parameters["aspect"]);
