@@ -17,7 +17,8 @@ public static class PointSampling
     /// <remarks>
     /// Per batch the driver writes <see cref="PlannedBatch.MassPerPoint"/> into every mass, the batch layer into
     /// every layer index, and the target density: the batch's own density when it gives one, else ρ(|x|) once per batch when the batch lies at one radius, else in
-    /// chunks of 256 points through the profile's batch <c>Density</c> call. Batches run through
+    /// chunks of 256 points through the profile's batch <c>Density</c> call; where ρ is not finite (a cusp at r = 0)
+    /// the point gets the mean density m / (4π/3 r(m)³) of the central ball holding its mass m. Batches run through
     /// <see cref="ParallelLoop"/>; jobs smaller than the settings' minimum chunk run on the calling thread.
     /// Memory: the point set takes 44 bytes per point (see <see cref="PointSet"/>), and nothing per point else.
     /// Provenance parameters are the sampler's parameter texts plus <c>mode</c> and <c>requested-count</c>.
@@ -105,7 +106,20 @@ public static class PointSampling
                 double xi = x[s + i], yi = y[s + i], zi = z[s + i];
                 r[i] = Math.Sqrt(xi * xi + yi * yi + zi * zi);
             }
-            request.Profile.Density(r[..n], rho.Slice(s, n));
+            var part = rho.Slice(s, n);
+            request.Profile.Density(r[..n], part);
+            for (int i = 0; i < n; i++)
+                if (!double.IsFinite(part[i])) part[i] = CuspDensity(request.Profile, points.Mass[b.Start + s + i]);
         }
+    }
+
+    /// <summary>
+    /// Target density for a point where ρ is not finite (a central cusp at r = 0): the mean density of the central
+    /// ball that holds the point's mass, m / (4π/3 r(m)³).
+    /// </summary>
+    private static double CuspDensity(Profiles.IRadialProfile profile, double mass)
+    {
+        double r = profile.RadiusOfEnclosedMass(Math.Min(mass, profile.TotalMass));
+        return r > 0 ? mass / (4.0 / 3.0 * Math.PI * r * r * r) : 0.0;
     }
 }

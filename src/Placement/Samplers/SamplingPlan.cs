@@ -1,4 +1,5 @@
 using System.Globalization;
+using Placement.Profiles;
 
 namespace Placement.Samplers;
 
@@ -54,6 +55,22 @@ public class SamplingPlan
     /// <summary>Asserts the plan's invariants: batches tile [0, Count) in order, masses finite and ≥ 0.</summary>
     /// <exception cref="InvalidOperationException">An invariant is broken; the message names the batch.</exception>
     public virtual void CheckValidity() => CheckBatches();
+
+    /// <summary>
+    /// Asserts the plan's invariants, including those that need the profile it was made for (derived plans check
+    /// e.g. shell boundary masses); the base checks batches and that the planned mass equals M within
+    /// <paramref name="relativeTolerance"/>.
+    /// </summary>
+    /// <exception cref="InvalidOperationException">An invariant is broken.</exception>
+    public virtual void CheckValidity(IRadialProfile profile, double relativeTolerance = 1e-12)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        CheckValidity();
+        double total = TotalMass();
+        if (!(Math.Abs(total - profile.TotalMass) <= relativeTolerance * profile.TotalMass))
+            throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture,
+                $"The plan's mass {total:R} differs from the profile's {profile.TotalMass:R} by more than {relativeTolerance} relative."));
+    }
 
     private void CheckBatches()
     {

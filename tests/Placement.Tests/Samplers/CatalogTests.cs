@@ -81,6 +81,20 @@ public class CatalogTests
     }
 
     [Fact]
+    public void ResultCheck_CatchesABrokenSampler()
+    {
+        // A sampler that places a point outside the body and plans the wrong mass must fail the invariant check.
+        var profile = new UniformSphere(1, 1);
+        var result = PointSampling.Place(new OriginTestSampler(), new SamplingRequest(profile, 5));
+        result.CheckValidity(profile);
+        result.Points.X[2] = 1.5;
+        Assert.Throws<InvalidOperationException>(() => result.CheckValidity(profile));
+        result.Points.X[2] = 0;
+        result.Points.Mass[0] *= 2;
+        Assert.Throws<InvalidOperationException>(() => result.CheckValidity(profile));
+    }
+
+    [Fact]
     public void Contract_Guards_RejectBadRequestsAndPlans()
     {
         var profile = new UniformSphere(1, 1);

@@ -49,19 +49,16 @@ public class SamplerTests
     [MemberData(nameof(SamplerNames))]
     public void Sampler_TotalMassIsExactAndPointsAreValid(string name)
     {
-        foreach (string profileName in new[] { "uniform", "plummer", "layered" })
+        foreach (string profileName in new[] { "uniform", "plummer", "layered", "steep-envelope" })
         {
             var profile = ShellLayoutTests.Profile(profileName);
             foreach (int n in new[] { 1, 2, 5, 12, 13, 100, 4321 })
             {
                 var result = Place(name, profile, n);
                 var p = result.Points;
-                p.CheckValidity();
-                result.Plan.CheckValidity();
-                // Equal masses M/N summed N times: relative rounding ≤ N·ε, far below 1e-12.
-                Assert.Equal(profile.TotalMass, p.TotalMass(), profile.TotalMass * 1e-12);
-                for (int i = 0; i < p.Count; i++)
-                    Assert.True(p.Radius(i) <= profile.OuterRadius * (1 + 1e-12), $"{name} n={n}: point {i} at r = {p.Radius(i)}");
+                // Equal masses M/N summed N times (compensated): relative rounding far below 1e-12; radii ≤ R;
+                // planned masses and layers; shell boundary masses for shell plans.
+                result.CheckValidity(profile, 1e-12);
                 if (name != "stretched-lattice") Assert.Equal(n, p.Count);
                 Assert.Equal(name, p.Provenance.Sampler);
                 Assert.Equal(profile.Fingerprint, p.Provenance.ProfileFingerprint);
@@ -74,6 +71,7 @@ public class SamplerTests
     [InlineData("healpix-shells", "polytrope-n1")]
     [InlineData("healpix-shells", "plummer")]
     [InlineData("healpix-shells", "layered")]
+    [InlineData("healpix-shells", "steep-envelope")]
     [InlineData("random-shells", "plummer")]
     [InlineData("stratified-shells", "polytrope-n1")]
     public void ShellSamplers_PointsEnclosedMass_EqualsProfileAtEveryShellBoundary(string name, string profileName)
@@ -285,11 +283,27 @@ public class SamplerTests
     public void MeshGeneratorMode_RecordsModeAndKeepsExactMass()
     {
         var profile = TestProfiles.Plummer();
-        var p = Place("healpix-shells", profile, 1000, mode: SamplingMode.MeshGenerators).Points;
+        var result = Place("healpix-shells", profile, 1000, mode: SamplingMode.MeshGenerators);
+        result.CheckValidity(profile);
+        var p = result.Points;
         Assert.Equal("mesh-generators", p.Provenance.Parameters["mode"]);
         Assert.Equal("1000", p.Provenance.Parameters["requested-count"]);
         Assert.Equal("1", p.Provenance.Parameters["aspect"]);
         Assert.Equal(1.0, p.TotalMass(), 1e-12);
+    }
+
+    [Fact]
+    public void LatticePointAtCusp_GetsMeanDensityOfItsBall()
+    {
+        // The layered profile has ρ → ∞ at r = 0 (α = 1 cusp); a lattice with zero offset keeps a point there.
+        var profile = TestProfiles.Layered();
+        var p = Place("stretched-lattice", profile, 2000).Points;
+        p.CheckValidity();
+        int centre = -1;
+        for (int i = 0; i < p.Count; i++) if (p.Radius(i) == 0) centre = i;
+        Assert.True(centre >= 0, "expected a lattice point at the origin");
+        double m = p.Mass[centre], rc = profile.RadiusOfEnclosedMass(m);
+        Assert.Equal(m / (4.0 / 3.0 * Math.PI * rc * rc * rc), p.TargetDensity[centre], 1e-12 * p.TargetDensity[centre]);
     }
 
     [Fact]

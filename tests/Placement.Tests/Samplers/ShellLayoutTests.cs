@@ -5,7 +5,7 @@ namespace Placement.Tests.Samplers;
 
 public class ShellLayoutTests
 {
-    public static TheoryData<string> ProfileNames => ["uniform", "plummer", "polytrope-n1", "layered"];
+    public static TheoryData<string> ProfileNames => ["uniform", "plummer", "polytrope-n1", "layered", "steep-envelope"];
 
     internal static IRadialProfile Profile(string name) => name switch
     {
@@ -13,6 +13,7 @@ public class ShellLayoutTests
         "plummer" => TestProfiles.Plummer(),
         "polytrope-n1" => TestProfiles.PolytropeN1(),
         "layered" => TestProfiles.Layered(),
+        "steep-envelope" => TestProfiles.SteepEnvelope(),
         _ => throw new ArgumentException(name),
     };
 

@@ -22,6 +22,12 @@ internal static class TestProfiles
     /// </summary>
     public static IRadialProfile Layered() => new PowerLawLayers([0.0, 0.1, 0.5, 1.0], [1.0, 2.0, 12.0], [1.0, 0.01, 1.0]);
 
+    /// <summary>
+    /// A uniform core (r &lt; 0.05) under an α = 8 power-law envelope to R = 1: the density falls by 10.4 decades
+    /// through the envelope, like a giant star's.
+    /// </summary>
+    public static IRadialProfile SteepEnvelope() => new PowerLawLayers([0.0, 0.05, 1.0], [0.0, 8.0], [1.0, 1.0]);
+
     private abstract class ProfileBase(double mass, double radius, string name) : IRadialProfile
     {
         public UnitSystem Units => UnitSystem.Dimensionless;
@@ -135,7 +141,7 @@ internal static class TestProfiles
         }
 
         public override double Density(double r) =>
-            r < 0 || r > OuterRadius ? 0 : r == 0 ? double.MaxValue : _a[LayerOf(r)] * Math.Pow(r, -_alpha[LayerOf(r)]);
+            r < 0 || r > OuterRadius ? 0 : r == 0 && _alpha[0] > 0 ? double.PositiveInfinity : _a[LayerOf(r)] * Math.Pow(r, -_alpha[LayerOf(r)]);
 
         public override double EnclosedMass(double r)
         {

@@ -74,7 +74,9 @@ public static class HealpixGeometry
         }
         else
         {
-            double zz = 4.0 / 3.0 - 2.0 * i / (3.0 * n);
+            // z = 4/3 − 2i/(3N_side) = 2(2N_side − i)/(3N_side): exact integer numerator, one rounding, and exactly
+            // antisymmetric between ring i and its mirror 4N_side − i, so the centres sum to zero.
+            double zz = 2.0 * (2 * nSide - i) / (3.0 * n);
             long first = 2L * nSide * (nSide - 1) + 4L * nSide * (i - nSide);
             double step = Math.PI / (2.0 * n);
             double shift = ((i + nSide) & 1) == 1 ? 0.0 : 0.5; // φ = step (j − s), j = 1 … : first φ = step (1 − s)

@@ -20,7 +20,9 @@ namespace Placement.Samplers.Shells;
 /// last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
 /// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
 /// greedy value; a search over nearby integers finds such sums (more parts and wider windows are tried if the
-/// nearest fail; with five or more parts there is no number-theoretic obstruction).</para>
+/// nearest fail; with five or more parts there is no number-theoretic obstruction). The outermost shell always
+/// ends at R: where an extended envelope holds less than one shell's worth of mass, that shell is radially thick
+/// (its points sit at the envelope's mass midpoint), which is the resolution limit of equal-mass points.</para>
 /// <para>Centre: c = 1 puts one point at the origin; c ≥ 2 puts c points on a sphere at the mass midpoint radius
 /// r(m c/2) of the central ball, in the directions of a spherical Fibonacci set (z_j = 1 − (2j+1)/c,
 /// φ_j = j·π(3 − √5)), turned by the cluster's own random rotation; c = 0 means the first shell starts at r = 0. A single central point

@@ -1,3 +1,5 @@
+using Placement.Profiles;
+
 namespace Placement.Samplers.Shells;
 
 /// <summary>A sampling plan for a shell sampler: batch 0 is the central cluster (layer 0), batch k ≥ 1 is shell k.</summary>
@@ -17,6 +19,14 @@ public sealed class ShellPlan : SamplingPlan
 
     /// <summary>The sampler's parameters, parsed once for all shells.</summary>
     public SamplerParameterValues Parameters { get; }
+
+    /// <inheritdoc />
+    /// <remarks>Also checks the shells against the profile (<see cref="ShellLayout.CheckValidity"/>).</remarks>
+    public override void CheckValidity(IRadialProfile profile, double relativeTolerance = 1e-12)
+    {
+        base.CheckValidity(profile, relativeTolerance);
+        Layout.CheckValidity(profile, relativeTolerance);
+    }
 
     private static ShellLayout CheckNotNull(ShellLayout layout)
     {
