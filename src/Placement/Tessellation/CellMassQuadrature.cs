@@ -1,0 +1,94 @@
+using Placement.Profiles;
+
+namespace Placement.Tessellation;
+
+/// <summary>
+/// Mass ∫ρ dV of one convex cell for a spherically symmetric profile centred at the origin, by a signed
+/// tetrahedral (cone) decomposition from the profile centre with the radial integral done exactly through M(r).
+/// </summary>
+/// <remarks>
+/// <para>For a face f with outward unit normal n̂ at signed distance h_f = n̂·x from the origin, the cone from the
+/// origin over f holds ∫ρ dV = (h_f / 4π) ∫_f M(|x|) / |x|³ dA, because along each ray the mass between the origin
+/// and the face is M(|x|)/(4π) per steradian and dΩ = h_f dA/|x|³ (Gauss's divergence theorem applied to the
+/// cone). Summing over faces with their signs gives the cell mass exactly; only the face integral is numerical.
+/// Each face is fanned into triangles, each triangle split in four until its longest edge is at most
+/// <c>angle</c> × its nearest vertex's distance from the origin (at most 6 levels), and integrated by Dunavant's
+/// 7-point degree-5 rule (Dunavant 1985, Int. J. Numer. Meth. Eng. 21, 1129, table for p = 5).</para>
+/// <para>Error: for smooth ρ the face error is O(β⁶) relative (β the angular size), so a whole set's total mass,
+/// in which the exact cone integrals of shared faces cancel, matches the profile mass in the domain to far
+/// better than 1e-6 relative whatever the point noise; density steps make M only kinked, which costs O(β²)
+/// locally on faces crossing the step. Cost: 7 profile calls per triangle, about 30 triangles per cell.</para>
+/// </remarks>
+internal static class CellMassQuadrature
+{
+    private static readonly double[] W = [0.225, 0.132394152788506, 0.132394152788506, 0.132394152788506, 0.125939180544827, 0.125939180544827, 0.125939180544827];
+    private const double A1 = 0.059715871789770, B1 = 0.470142064105115, A2 = 0.797426985353087, B2 = 0.101286507323456;
+    private static readonly double[] L1 = [1.0 / 3, A1, B1, B1, A2, B2, B2];
+    private static readonly double[] L2 = [1.0 / 3, B1, A1, B1, B2, A2, B2];
+
+    /// <summary>Mass of the cell (rings built) whose generator is at (gx, gy, gz) in profile coordinates.</summary>
+    public static double CellMass(ConvexCell cell, double gx, double gy, double gz, IRadialProfile profile, double angle)
+    {
+        var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var d = cell.D;
+        var start = cell.RingStart; var ring = cell.Ring;
+        var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
+        double total = 0;
+        for (int p = 0; p < cell.PlaneCount; p++)
+        {
+            int s = start[p], e = start[p + 1];
+            if (e - s < 3) continue;
+            double norm = Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
+            double h = (d[p] + nx[p] * gx + ny[p] * gy + nz[p] * gz) / norm;
+            if (h == 0) continue;
+            int t0 = ring[s];
+            double ax = gx + vx[t0], ay = gy + vy[t0], az = gz + vz[t0];
+            double face = 0;
+            for (int k = s + 1; k < e - 1; k++)
+            {
+                int t1 = ring[k], t2 = ring[k + 1];
+                face += Triangle(ax, ay, az, gx + vx[t1], gy + vy[t1], gz + vz[t1], gx + vx[t2], gy + vy[t2], gz + vz[t2], profile, angle, 0);
+            }
+            total += h * face;
+        }
+        return total / (4.0 * Math.PI);
+    }
+
+    // ∫ M(|x|)/|x|³ dA over the triangle (a, b, c), adaptively split.
+    private static double Triangle(double ax, double ay, double az, double bx, double by, double bz, double cx, double cy, double cz,
+        IRadialProfile profile, double angle, int depth)
+    {
+        double e1 = Dist2(ax, ay, az, bx, by, bz), e2 = Dist2(bx, by, bz, cx, cy, cz), e3 = Dist2(cx, cy, cz, ax, ay, az);
+        double edge2 = Math.Max(e1, Math.Max(e2, e3));
+        double near2 = Math.Min(ax * ax + ay * ay + az * az, Math.Min(bx * bx + by * by + bz * bz, cx * cx + cy * cy + cz * cz));
+        if (depth < 6 && edge2 > angle * angle * near2)
+        {
+            double abx = 0.5 * (ax + bx), aby = 0.5 * (ay + by), abz = 0.5 * (az + bz);
+            double bcx = 0.5 * (bx + cx), bcy = 0.5 * (by + cy), bcz = 0.5 * (bz + cz);
+            double cax = 0.5 * (cx + ax), cay = 0.5 * (cy + ay), caz = 0.5 * (cz + az);
+            return Triangle(ax, ay, az, abx, aby, abz, cax, cay, caz, profile, angle, depth + 1)
+                 + Triangle(abx, aby, abz, bx, by, bz, bcx, bcy, bcz, profile, angle, depth + 1)
+                 + Triangle(cax, cay, caz, bcx, bcy, bcz, cx, cy, cz, profile, angle, depth + 1)
+                 + Triangle(abx, aby, abz, bcx, bcy, bcz, cax, cay, caz, profile, angle, depth + 1);
+        }
+        double ux = bx - ax, uy = by - ay, uz = bz - az, wx = cx - ax, wy = cy - ay, wz = cz - az;
+        double crx = uy * wz - uz * wy, cry = uz * wx - ux * wz, crz = ux * wy - uy * wx;
+        double area = 0.5 * Math.Sqrt(crx * crx + cry * cry + crz * crz);
+        double sum = 0;
+        for (int q = 0; q < 7; q++)
+        {
+            double l1 = L1[q], l2 = L2[q], l0 = 1 - l1 - l2;
+            double px = l0 * ax + l1 * bx + l2 * cx, py = l0 * ay + l1 * by + l2 * cy, pz = l0 * az + l1 * bz + l2 * cz;
+            double r2 = px * px + py * py + pz * pz;
+            double r = Math.Sqrt(r2);
+            // M(r)/r³ → (4π/3)ρ(0) as r → 0; a quadrature point exactly at the origin uses that limit.
+            sum += W[q] * (r > 0 ? profile.EnclosedMass(r) / (r2 * r) : 4.0 / 3.0 * Math.PI * profile.Density(0));
+        }
+        return area * sum;
+    }
+
+    private static double Dist2(double ax, double ay, double az, double bx, double by, double bz)
+    {
+        double dx = ax - bx, dy = ay - by, dz = az - bz;
+        return dx * dx + dy * dy + dz * dz;
+    }
+}
