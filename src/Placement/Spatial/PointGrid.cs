@@ -225,6 +225,107 @@ public sealed class PointGrid
         return added;
     }
 
+    /// <summary>
+    /// Appends to <paramref name="buffer"/> every point (or periodic image) whose squared distance d² from
+    /// (x, y, z) satisfies <paramref name="innerSquared"/> ≤ d² &lt; <paramref name="outerSquared"/>, unsorted;
+    /// returns how many were added. The zero-shift copy of original index <paramref name="exclude"/> is skipped.
+    /// </summary>
+    /// <remarks>
+    /// Scans whole rows of grid cells: for each (y, z) row that meets the ball, the cells meeting it along x are
+    /// contiguous in the sorted arrays, so each row is one tight loop over points. Calling it with growing shells
+    /// [r₀, r₁), [r₁, r₂), … gathers each point exactly once. Cost: the points of the rows meeting the ball
+    /// (about 2× the ball's count), plus a few operations per row.
+    /// </remarks>
+    /// <param name="x">Query x, length units.</param>
+    /// <param name="y">Query y.</param>
+    /// <param name="z">Query z.</param>
+    /// <param name="innerSquared">Inclusive lower limit on d², length².</param>
+    /// <param name="outerSquared">Exclusive upper limit on d², length².</param>
+    /// <param name="exclude">Original index to skip at zero shift, or −1.</param>
+    /// <param name="buffer">Receives the neighbours (not cleared).</param>
+    /// <exception cref="ArgumentNullException"><paramref name="buffer"/> is null.</exception>
+    public int CollectInShell(double x, double y, double z, double innerSquared, double outerSquared, int exclude, NeighbourBuffer buffer)
+    {
+        ArgumentNullException.ThrowIfNull(buffer);
+        if (!(outerSquared > innerSquared)) return 0;
+        int before = buffer.Count;
+        double outer = Math.Sqrt(outerSquared);
+        int ix = Math.Clamp((int)Math.Floor((x - MinX) * _inverseX), 0, CountX - 1);
+        int iy = Math.Clamp((int)Math.Floor((y - MinY) * _inverseY), 0, CountY - 1);
+        int iz = Math.Clamp((int)Math.Floor((z - MinZ) * _inverseZ), 0, CountZ - 1);
+        // Query position relative to its cell's lower corner.
+        double fx = x - (MinX + ix * CellSizeX), fy = y - (MinY + iy * CellSizeY), fz = z - (MinZ + iz * CellSizeZ);
+        int zLo = iz - Reach(outer, fz, CellSizeZ), zHi = iz + Reach(outer, CellSizeZ - fz, CellSizeZ);
+        int yLo = iy - Reach(outer, fy, CellSizeY), yHi = iy + Reach(outer, CellSizeY - fy, CellSizeY);
+        if (!Periodic)
+        {
+            zLo = Math.Max(zLo, 0); zHi = Math.Min(zHi, CountZ - 1);
+            yLo = Math.Max(yLo, 0); yHi = Math.Min(yHi, CountY - 1);
+        }
+        for (int cz = zLo; cz <= zHi; cz++)
+        {
+            double gz = Gap(cz - iz, fz, CellSizeZ);
+            double remZ = outerSquared - gz * gz;
+            if (remZ <= 0) continue;
+            int wz = Periodic ? FloorDiv(cz, CountZ) : 0;
+            int rz = cz - wz * CountZ;
+            double sz = wz * LengthZ - z;
+            for (int cy = yLo; cy <= yHi; cy++)
+            {
+                double gy = Gap(cy - iy, fy, CellSizeY);
+                double rem = remZ - gy * gy;
+                if (rem <= 0) continue;
+                int wy = Periodic ? FloorDiv(cy, CountY) : 0;
+                int ry = cy - wy * CountY;
+                double sy = wy * LengthY - y;
+                double reach = Math.Sqrt(rem);
+                int xLo = ix - Reach(reach, fx, CellSizeX), xHi = ix + Reach(reach, CellSizeX - fx, CellSizeX);
+                int rowBase = CountX * (ry + CountY * rz);
+                if (!Periodic)
+                {
+                    xLo = Math.Max(xLo, 0); xHi = Math.Min(xHi, CountX - 1);
+                    ScanRange(CellStart[rowBase + xLo], CellStart[rowBase + xHi + 1], -x, sy, sz, innerSquared, outerSquared, exclude, true, buffer);
+                    continue;
+                }
+                // Periodic rows may wrap, possibly several times for small grids: one contiguous run per period.
+                for (int cx = xLo; cx <= xHi;)
+                {
+                    int wx = FloorDiv(cx, CountX);
+                    int rx = cx - wx * CountX;
+                    int runEnd = Math.Min(xHi, (wx + 1) * CountX - 1);
+                    int rxEnd = runEnd - wx * CountX;
+                    bool zero = wx == 0 && wy == 0 && wz == 0;
+                    ScanRange(CellStart[rowBase + rx], CellStart[rowBase + rxEnd + 1], wx * LengthX - x, sy, sz, innerSquared, outerSquared, exclude, zero, buffer);
+                    cx = runEnd + 1;
+                }
+            }
+        }
+        return buffer.Count - before;
+    }
+
+    private void ScanRange(int from, int to, double ox, double oy, double oz, double inner2, double outer2, int exclude, bool zeroShift, NeighbourBuffer buffer)
+    {
+        if (from >= to) return;
+        int before = buffer.Count;
+        buffer.AppendRange(this, from, to, ox, oy, oz, inner2, outer2);
+        if (!zeroShift || exclude < 0) return;
+        // Drop the excluded point (at most one hit) from what was just appended.
+        var slots = buffer.Slot;
+        for (int i = before; i < buffer.Count; i++)
+        {
+            if (SortedIndex[slots[i]] != exclude) continue;
+            buffer.RemoveAtSwap(i);
+            break;
+        }
+    }
+
+    // Whole cells beyond the query's own cell needed to reach distance r when the query is `toFace` from the face.
+    private static int Reach(double r, double toFace, double h) => r <= toFace ? 0 : (int)Math.Ceiling((r - toFace) / h);
+
+    private static double Gap(int d, double f, double h) => d > 0 ? (d - 1) * h + (h - f) : d < 0 ? (-d - 1) * h + f : 0.0;
+
+    private static int FloorDiv(int a, int b) => a >= 0 ? a / b : -((-a + b - 1) / b);
+
     private static int AxisCells(double length, double h)
     {
         double c = Math.Round(length / h);

@@ -16,7 +16,11 @@ internal sealed class CellBuilder
     private readonly TessellationOptions _options;
     private readonly VoronoiCells _cells;
     private readonly ConvexCell _cell = new();
-    private readonly NeighbourSearch _search;
+    private readonly NeighbourBuffer _buffer = new(256);
+    private readonly double _diagonal2;
+    private double _lastSecurity;
+    private int[] _order = new int[256];
+    private int[] _bucketOf = new int[256];
     private readonly double _duplicate2;
     private readonly int[] _selfCodes = new int[6];
     private double[] _faceArea = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
@@ -27,7 +31,7 @@ internal sealed class CellBuilder
         _domain = domain;
         _options = options;
         _cells = cells;
-        _search = new NeighbourSearch(grid);
+        _diagonal2 = grid.LengthX * grid.LengthX + grid.LengthY * grid.LengthY + grid.LengthZ * grid.LengthZ;
         double dup = options.DuplicateTolerance * spacing;
         _duplicate2 = dup * dup;
     }
@@ -56,28 +60,73 @@ internal sealed class CellBuilder
                 d.Kind == DomainKind.Sphere ? SphereCodes : BoxCodes);
         }
         cell.Tolerance = _options.ClipTolerance * Math.Sqrt(cell.MaxRadiusSquared);
-        _search.Start(gx, gy, gz, self);
+        // Gather neighbours in growing shells [r0, r1): the first radius follows the previous cell's security
+        // radius (consecutive cells are neighbours in space, so of similar size), later ones the current cell's.
+        double inner2 = 0;
+        double outer = _lastSecurity > 0 ? _lastSecurity : 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
         bool first = true;
         long tested = 0, cutCount = 0;
-        while (_search.Next(4.0 * cell.MaxRadiusSquared, out var hit))
+        var buffer = _buffer;
+        while (true)
         {
-            int other = g.SortedIndex[hit.Slot];
-            if (first)
+            double outer2 = outer * outer;
+            buffer.Clear();
+            g.CollectInShell(gx, gy, gz, inner2, outer2, self, buffer);
+            var order = NearFirstOrder(buffer, inner2, outer2);
+            var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
+            for (int k = 0; k < order.Length; k++)
             {
-                if (hit.DistanceSquared <= _duplicate2)
+                int q = order[k];
+                double d2 = dist2[q];
+                if (d2 >= 4.0 * cell.MaxRadiusSquared) continue;
+                int other = g.SortedIndex[slotOf[q]];
+                if (d2 <= _duplicate2)
                     throw new ArgumentException(
-                        $"Points {Math.Min(self, other)} and {Math.Max(self, other)} coincide (distance {Math.Sqrt(hit.DistanceSquared)} at ({gx}, {gy}, {gz})); a Voronoi tessellation needs distinct generators: remove or merge duplicates first.");
-                cell.Tolerance = _options.ClipTolerance * Math.Sqrt(hit.DistanceSquared);
-                first = false;
+                        $"Points {Math.Min(self, other)} and {Math.Max(self, other)} coincide (distance {Math.Sqrt(d2)} at ({gx}, {gy}, {gz})); a Voronoi tessellation needs distinct generators: remove or merge duplicates first.");
+                if (first)
+                {
+                    // Tolerance from the first (near-nearest) neighbour: rounding scales with the cell size.
+                    cell.Tolerance = _options.ClipTolerance * Math.Sqrt(d2);
+                    first = false;
+                }
+                tested++;
+                if (cell.Clip(bx[q], by[q], bz[q], 0.5 * d2, other)) cutCount++;
             }
-            tested++;
-            if (cell.Clip(hit.Dx, hit.Dy, hit.Dz, 0.5 * hit.DistanceSquared, other)) cutCount++;
+            double security2 = 4.0 * cell.MaxRadiusSquared;
+            if (security2 <= outer2 || (!g.Periodic && outer2 > _diagonal2)) break;
+            inner2 = outer2;
+            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
+            outer = Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
         }
+        _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz);
         PlanesTested += tested;
         PlanesCut += cutCount;
         cell.BuildFaceRings();
         Measure(self, gx, gy, gz, faces);
+    }
+
+    // Indices of the buffer's neighbours in near-first order: 16 buckets of equal width in d² over the shell
+    // [inner², outer²), unsorted within a bucket. Exact order is not needed for correctness (the cell is complete
+    // only once every point inside the security radius was used); near-first only keeps the cell small early.
+    private ReadOnlySpan<int> NearFirstOrder(NeighbourBuffer buffer, double inner2, double outer2)
+    {
+        const int buckets = 16;
+        int n = buffer.Count;
+        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
+        Span<int> start = stackalloc int[buckets + 1];
+        start.Clear();
+        var d2 = buffer.DistanceSquared;
+        double scale = buckets / (outer2 - inner2);
+        for (int i = 0; i < n; i++)
+        {
+            int k = Math.Clamp((int)((d2[i] - inner2) * scale), 0, buckets - 1);
+            _bucketOf[i] = k;
+            start[k + 1]++;
+        }
+        for (int k = 0; k < buckets; k++) start[k + 1] += start[k];
+        for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
+        return _order.AsSpan(0, n);
     }
 
     private void ClipToSphere(double gx, double gy, double gz)

@@ -1,4 +1,7 @@
+using System.Numerics;
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics;
 
 namespace Placement.Tessellation;
 
@@ -26,11 +29,12 @@ internal sealed class ConvexCell
     private int _planeCount;
 
     private int[] _ta = new int[128], _tb = new int[128], _tc = new int[128];
-    private double[] _vx = new double[128], _vy = new double[128], _vz = new double[128];
+    private double[] _vx = new double[128], _vy = new double[128], _vz = new double[128], _vr2 = new double[128];
     private int _triCount;
 
-    private bool[] _removed = new bool[128];
-    private int[] _edgeFrom = new int[384], _edgeTo = new int[384];
+    private ulong[] _removed = new ulong[2];
+    private int[] _edgeKey = new int[384];
+    private readonly ulong[] _outMask = new ulong[64], _inMask = new ulong[64];
     private int[] _next = new int[64], _nextStamp = new int[64];
     private int _stamp;
 
@@ -80,7 +84,7 @@ internal sealed class ConvexCell
             if (sign < 0) (a, b) = (b, a);
             double x = sx == 1 ? hix : lox, y = sy == 1 ? hiy : loy, z = sz == 1 ? hiz : loz;
             _ta[_triCount] = a; _tb[_triCount] = b; _tc[_triCount] = c;
-            _vx[_triCount] = x; _vy[_triCount] = y; _vz[_triCount] = z;
+            _vx[_triCount] = x; _vy[_triCount] = y; _vz[_triCount] = z; _vr2[_triCount] = x * x + y * y + z * z;
             _triCount++;
             max = Math.Max(max, x * x + y * y + z * z);
         }
@@ -90,6 +94,7 @@ internal sealed class ConvexCell
     private int AddPlane(double nx, double ny, double nz, double d, int neighbour)
     {
         if (_planeCount == _nx.Length) GrowPlanes();
+        if (_planeCount >= short.MaxValue) throw new InvalidOperationException("A cell exceeded 32767 planes (edge keys pack plane indices in 16 bits).");
         int p = _planeCount++;
         _nx[p] = nx; _ny[p] = ny; _nz[p] = nz; _d[p] = d; _neighbour[p] = neighbour;
         return p;
@@ -103,9 +108,12 @@ internal sealed class ConvexCell
     {
         double norm = Math.Sqrt(nx * nx + ny * ny + nz * nz);
         double eps = Tolerance * norm;
+        // Quick rejection: no vertex can lie beyond a plane farther than the farthest vertex.
+        double reach = d - eps;
+        if (reach > 0 && reach * reach > MaxRadiusSquared * norm * norm) return false;
         for (int attempt = 0; attempt < 4; attempt++)
         {
-            int r = Classify(nx, ny, nz, d, eps);
+            int r = Classify(nx, ny, nz, d + eps);
             if (r == 0) return false;
             if (r == _triCount)
                 throw new InvalidOperationException("A clipping plane removed the whole cell; the generator lies outside its own half-space.");
@@ -115,53 +123,50 @@ internal sealed class ConvexCell
         throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance (degenerate input beyond double precision).");
     }
 
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private int Classify(double nx, double ny, double nz, double d, double eps)
+    // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.
+    private int Classify(double nx, double ny, double nz, double limit)
     {
-        int removed = 0;
-        double limit = d + eps;
-        var vx = _vx; var vy = _vy; var vz = _vz; var rm = _removed;
-        for (int t = 0; t < _triCount; t++)
+        int removed = 0, t = 0, count = _triCount;
+        var rm = _removed;
+        // Clear every word: triangles appended by the rebuild may land in words beyond the current count.
+        Array.Clear(rm);
+        if (Vector256.IsHardwareAccelerated)
         {
-            bool out_ = nx * vx[t] + ny * vy[t] + nz * vz[t] > limit;
-            rm[t] = out_;
-            if (out_) removed++;
+            var vnx = Vector256.Create(nx); var vny = Vector256.Create(ny); var vnz = Vector256.Create(nz); var vl = Vector256.Create(limit);
+            ref double px = ref MemoryMarshal.GetArrayDataReference(_vx);
+            ref double py = ref MemoryMarshal.GetArrayDataReference(_vy);
+            ref double pz = ref MemoryMarshal.GetArrayDataReference(_vz);
+            for (; t + 4 <= count; t += 4)
+            {
+                var dot = vnx * Vector256.LoadUnsafe(ref px, (nuint)t) + vny * Vector256.LoadUnsafe(ref py, (nuint)t) + vnz * Vector256.LoadUnsafe(ref pz, (nuint)t);
+                uint bits = Vector256.GreaterThan(dot, vl).ExtractMostSignificantBits();
+                if (bits == 0) continue;
+                rm[t >> 6] |= (ulong)bits << (t & 63);
+                removed += BitOperations.PopCount(bits);
+            }
+        }
+        var vx = _vx; var vy = _vy; var vz = _vz;
+        for (; t < count; t++)
+        {
+            if (nx * vx[t] + ny * vy[t] + nz * vz[t] > limit)
+            {
+                rm[t >> 6] |= 1UL << (t & 63);
+                removed++;
+            }
         }
         return removed;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private bool IsRemoved(int t) => (_removed[t >> 6] & (1UL << (t & 63))) != 0;
+
     private bool TryRebuild(double nx, double ny, double nz, double d, int neighbour)
     {
-        // Edges of removed triangles.
-        int e = 0;
-        for (int t = 0; t < _triCount; t++)
-        {
-            if (!_removed[t]) continue;
-            if (e + 3 > _edgeFrom.Length) { Array.Resize(ref _edgeFrom, _edgeFrom.Length * 2); Array.Resize(ref _edgeTo, _edgeTo.Length * 2); }
-            int a = _ta[t], b = _tb[t], c = _tc[t];
-            _edgeFrom[e] = a; _edgeTo[e] = b; e++;
-            _edgeFrom[e] = b; _edgeTo[e] = c; e++;
-            _edgeFrom[e] = c; _edgeTo[e] = a; e++;
-        }
-        // Boundary edges: their reverse is not an edge of another removed triangle.
         if (_next.Length < _planeCount + 1) GrowScratchPlanes(_planeCount + 1);
         int stamp = ++_stamp;
         int boundary = 0, first = -1;
-        for (int i = 0; i < e; i++)
-        {
-            int from = _edgeFrom[i], to = _edgeTo[i];
-            bool interior = false;
-            for (int j = 0; j < e; j++)
-            {
-                if (_edgeFrom[j] == to && _edgeTo[j] == from) { interior = true; break; }
-            }
-            if (interior) continue;
-            if (_nextStamp[from] == stamp) return false; // a plane twice on the boundary: not a disc
-            _nextStamp[from] = stamp;
-            _next[from] = to;
-            boundary++;
-            first = from;
-        }
+        bool ok = _planeCount <= 64 ? BoundaryByMasks(stamp, ref boundary, ref first) : BoundaryByEdges(stamp, ref boundary, ref first);
+        if (!ok || boundary < 3) return false;
         // Walk the cycle once to check it is a single loop through every boundary edge.
         int steps = 0, x = first;
         do
@@ -173,20 +178,19 @@ internal sealed class ConvexCell
         if (steps != boundary || x != first) return false;
 
         int p = AddPlane(nx, ny, nz, d, neighbour);
-        // Fill removed slots with the new triangles (x, next[x], p), append the rest, compact if fewer.
+        // Fill removed slots with the new triangles (x, next[x], p), append the rest.
         int slot = 0;
         x = first;
         for (int k = 0; k < boundary; k++)
         {
             int y = _next[x];
-            while (slot < _triCount && !_removed[slot]) slot++;
+            while (slot < _triCount && !IsRemoved(slot)) slot++;
             int t;
-            if (slot < _triCount) { t = slot; _removed[slot] = false; slot++; }
+            if (slot < _triCount) { t = slot; _removed[slot >> 6] &= ~(1UL << (slot & 63)); slot++; }
             else
             {
                 if (_triCount == _ta.Length) GrowTriangles();
                 t = _triCount++;
-                _removed[t] = false;
             }
             _ta[t] = x; _tb[t] = y; _tc[t] = p;
             SetVertex(t, x, y, p);
@@ -198,24 +202,87 @@ internal sealed class ConvexCell
             int write = 0;
             for (int t = 0; t < _triCount; t++)
             {
-                if (_removed[t]) continue;
+                if (IsRemoved(t)) continue;
                 if (write != t) MoveTriangle(t, write);
                 write++;
             }
             _triCount = write;
         }
         double max = 0;
-        for (int t = 0; t < _triCount; t++)
-            max = Math.Max(max, _vx[t] * _vx[t] + _vy[t] * _vy[t] + _vz[t] * _vz[t]);
+        var r2 = _vr2;
+        for (int t = 0; t < _triCount; t++) if (r2[t] > max) max = r2[t];
         MaxRadiusSquared = max;
+        return true;
+    }
+
+    // Boundary of the removed patch when every plane index fits a 64-bit mask: for each plane x, the removed
+    // triangles (x, q, r) give out-edges x→q and in-edges r→x; the boundary edge leaving x is the out-edge whose
+    // target is not also an in-edge source. O(removed triangles).
+    private bool BoundaryByMasks(int stamp, ref int boundary, ref int first)
+    {
+        var outMask = _outMask; var inMask = _inMask;
+        ulong touched = 0;
+        int words = (_triCount + 63) >> 6;
+        for (int w = 0; w < words; w++)
+        for (ulong bits = _removed[w]; bits != 0; bits &= bits - 1)
+        {
+            int t = (w << 6) + BitOperations.TrailingZeroCount(bits);
+            int a = _ta[t], b = _tb[t], c = _tc[t];
+            outMask[a] |= 1UL << b; inMask[a] |= 1UL << c;
+            outMask[b] |= 1UL << c; inMask[b] |= 1UL << a;
+            outMask[c] |= 1UL << a; inMask[c] |= 1UL << b;
+            touched |= (1UL << a) | (1UL << b) | (1UL << c);
+        }
+        bool ok = true;
+        while (touched != 0)
+        {
+            int x = BitOperations.TrailingZeroCount(touched);
+            touched &= touched - 1;
+            ulong leaving = outMask[x] & ~inMask[x];
+            outMask[x] = 0; inMask[x] = 0;
+            if (leaving == 0) continue;
+            if ((leaving & (leaving - 1)) != 0) { ok = false; continue; } // two boundary edges leave x: not a disc
+            _nextStamp[x] = stamp;
+            _next[x] = BitOperations.TrailingZeroCount(leaving);
+            boundary++;
+            first = x;
+        }
+        return ok;
+    }
+
+    // General boundary search for cells with more than 64 planes: edges packed (from << 16 | to), a boundary edge
+    // is one whose reverse is not an edge of another removed triangle. O(edges²) but vectorised.
+    private bool BoundaryByEdges(int stamp, ref int boundary, ref int first)
+    {
+        int e = 0;
+        for (int t = 0; t < _triCount; t++)
+        {
+            if (!IsRemoved(t)) continue;
+            if (e + 3 > _edgeKey.Length) Array.Resize(ref _edgeKey, _edgeKey.Length * 2);
+            int a = _ta[t], b = _tb[t], c = _tc[t];
+            _edgeKey[e++] = (a << 16) | b;
+            _edgeKey[e++] = (b << 16) | c;
+            _edgeKey[e++] = (c << 16) | a;
+        }
+        var keys = _edgeKey.AsSpan(0, e);
+        for (int i = 0; i < e; i++)
+        {
+            int key = keys[i];
+            int from = key >> 16, to = key & 0xFFFF;
+            if (keys.Contains((to << 16) | from)) continue;
+            if (_nextStamp[from] == stamp) return false;
+            _nextStamp[from] = stamp;
+            _next[from] = to;
+            boundary++;
+            first = from;
+        }
         return true;
     }
 
     private void MoveTriangle(int from, int to)
     {
         _ta[to] = _ta[from]; _tb[to] = _tb[from]; _tc[to] = _tc[from];
-        _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from];
-        _removed[to] = _removed[from];
+        _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -232,6 +299,7 @@ internal sealed class ConvexCell
         _vx[t] = (da * bcx + db * cax + dc * abx) * inv;
         _vy[t] = (da * bcy + db * cay + dc * aby) * inv;
         _vz[t] = (da * bcz + db * caz + dc * abz) * inv;
+        _vr2[t] = _vx[t] * _vx[t] + _vy[t] * _vy[t] + _vz[t] * _vz[t];
     }
 
     // Face rings: for plane p, the triangles around its face in order, Ring[RingStart[p] .. RingStart[p+1]).
@@ -294,7 +362,7 @@ internal sealed class ConvexCell
     {
         int n = _ta.Length * 2;
         Array.Resize(ref _ta, n); Array.Resize(ref _tb, n); Array.Resize(ref _tc, n);
-        Array.Resize(ref _vx, n); Array.Resize(ref _vy, n); Array.Resize(ref _vz, n);
-        Array.Resize(ref _removed, n);
+        Array.Resize(ref _vx, n); Array.Resize(ref _vy, n); Array.Resize(ref _vz, n); Array.Resize(ref _vr2, n);
+        Array.Resize(ref _removed, (n + 63) >> 6);
     }
 }
