@@ -157,6 +157,20 @@ internal sealed class ConvexCell
         return removed;
     }
 
+    // First removed slot at or after word `word` (advanced past empty words), or −1.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private int NextRemoved(ref int word)
+    {
+        var rm = _removed;
+        int words = (_triCount + 63) >> 6;
+        for (; word < words; word++)
+        {
+            ulong bits = rm[word];
+            if (bits != 0) return (word << 6) + BitOperations.TrailingZeroCount(bits);
+        }
+        return -1;
+    }
+
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool IsRemoved(int t) => (_removed[t >> 6] & (1UL << (t & 63))) != 0;
 
@@ -179,14 +193,13 @@ internal sealed class ConvexCell
 
         int p = AddPlane(nx, ny, nz, d, neighbour);
         // Fill removed slots with the new triangles (x, next[x], p), append the rest.
-        int slot = 0;
+        int slot = 0; // word cursor into _removed
         x = first;
         for (int k = 0; k < boundary; k++)
         {
             int y = _next[x];
-            while (slot < _triCount && !IsRemoved(slot)) slot++;
-            int t;
-            if (slot < _triCount) { t = slot; _removed[slot >> 6] &= ~(1UL << (slot & 63)); slot++; }
+            int t = NextRemoved(ref slot);
+            if (t >= 0) _removed[t >> 6] &= ~(1UL << (t & 63));
             else
             {
                 if (_triCount == _ta.Length) GrowTriangles();
@@ -197,7 +210,7 @@ internal sealed class ConvexCell
             x = y;
         }
         // Remaining removed slots (the patch had interior vertices): compact, keeping order.
-        if (slot < _triCount)
+        if (NextRemoved(ref slot) >= 0)
         {
             int write = 0;
             for (int t = 0; t < _triCount; t++)
