@@ -71,10 +71,12 @@ public sealed class NeighbourBuffer
 
     /// <summary>
     /// Appends, without branches, the points of sorted slots [from, to) of <paramref name="grid"/> shifted by
-    /// (ox, oy, oz) (query subtracted) whose squared distance lies in [inner², outer²).
+    /// (ox, oy, oz) (query subtracted) whose squared distance lies in [inner², outer²), except slot <paramref name="skip"/>.
     /// </summary>
-    internal void AppendRange(PointGrid grid, int from, int to, double ox, double oy, double oz, double inner2, double outer2)
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal void AppendRange(PointGrid grid, int from, int to, double ox, double oy, double oz, double inner2, double outer2, int skip)
     {
+        if (from >= to) return;
         int need = Count + (to - from);
         while (need > _slot.Length) Grow();
         if ((uint)to > (uint)grid.SortedX.Length || from < 0) throw new InvalidOperationException("Grid slot range out of bounds.");
@@ -94,17 +96,9 @@ public sealed class NeighbourBuffer
             // Write unconditionally, advance only when inside the shell: no unpredictable branch.
             Unsafe.Add(ref slot, c) = s; Unsafe.Add(ref d2s, c) = d2;
             Unsafe.Add(ref dxs, c) = dx; Unsafe.Add(ref dys, c) = dy; Unsafe.Add(ref dzs, c) = dz;
-            c += (d2 < outer2 ? 1 : 0) & (d2 >= inner2 ? 1 : 0);
+            c += (d2 < outer2 ? 1 : 0) & (d2 >= inner2 ? 1 : 0) & (s != skip ? 1 : 0);
         }
         Count = c;
-    }
-
-    /// <summary>Removes the neighbour at <paramref name="index"/> by moving the last one into its place.</summary>
-    internal void RemoveAtSwap(int index)
-    {
-        int last = Count - 1;
-        _slot[index] = _slot[last]; _d2[index] = _d2[last]; _dx[index] = _dx[last]; _dy[index] = _dy[last]; _dz[index] = _dz[last];
-        Count = last;
     }
 
     private void Grow()

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace Placement.Spatial;
 
 /// <summary>
@@ -228,7 +230,7 @@ public sealed class PointGrid
     /// <summary>
     /// Appends to <paramref name="buffer"/> every point (or periodic image) whose squared distance d² from
     /// (x, y, z) satisfies <paramref name="innerSquared"/> ≤ d² &lt; <paramref name="outerSquared"/>, unsorted;
-    /// returns how many were added. The zero-shift copy of original index <paramref name="exclude"/> is skipped.
+    /// returns how many were added. The zero-shift copy of sorted slot <paramref name="excludeSlot"/> is skipped.
     /// </summary>
     /// <remarks>
     /// Scans whole rows of grid cells: for each (y, z) row that meets the ball, the cells meeting it along x are
@@ -241,10 +243,10 @@ public sealed class PointGrid
     /// <param name="z">Query z.</param>
     /// <param name="innerSquared">Inclusive lower limit on d², length².</param>
     /// <param name="outerSquared">Exclusive upper limit on d², length².</param>
-    /// <param name="exclude">Original index to skip at zero shift, or −1.</param>
+    /// <param name="excludeSlot">Sorted slot (not original index) to skip at zero shift, or −1.</param>
     /// <param name="buffer">Receives the neighbours (not cleared).</param>
     /// <exception cref="ArgumentNullException"><paramref name="buffer"/> is null.</exception>
-    public int CollectInShell(double x, double y, double z, double innerSquared, double outerSquared, int exclude, NeighbourBuffer buffer)
+    public int CollectInShell(double x, double y, double z, double innerSquared, double outerSquared, int excludeSlot, NeighbourBuffer buffer)
     {
         ArgumentNullException.ThrowIfNull(buffer);
         if (!(outerSquared > innerSquared)) return 0;
@@ -255,8 +257,8 @@ public sealed class PointGrid
         int iz = Math.Clamp((int)Math.Floor((z - MinZ) * _inverseZ), 0, CountZ - 1);
         // Query position relative to its cell's lower corner.
         double fx = x - (MinX + ix * CellSizeX), fy = y - (MinY + iy * CellSizeY), fz = z - (MinZ + iz * CellSizeZ);
-        int zLo = iz - Reach(outer, fz, CellSizeZ), zHi = iz + Reach(outer, CellSizeZ - fz, CellSizeZ);
-        int yLo = iy - Reach(outer, fy, CellSizeY), yHi = iy + Reach(outer, CellSizeY - fy, CellSizeY);
+        int zLo = iz - Reach(outer, fz, _inverseZ), zHi = iz + Reach(outer, CellSizeZ - fz, _inverseZ);
+        int yLo = iy - Reach(outer, fy, _inverseY), yHi = iy + Reach(outer, CellSizeY - fy, _inverseY);
         if (!Periodic)
         {
             zLo = Math.Max(zLo, 0); zHi = Math.Min(zHi, CountZ - 1);
@@ -279,12 +281,12 @@ public sealed class PointGrid
                 int ry = cy - wy * CountY;
                 double sy = wy * LengthY - y;
                 double reach = Math.Sqrt(rem);
-                int xLo = ix - Reach(reach, fx, CellSizeX), xHi = ix + Reach(reach, CellSizeX - fx, CellSizeX);
+                int xLo = ix - Reach(reach, fx, _inverseX), xHi = ix + Reach(reach, CellSizeX - fx, _inverseX);
                 int rowBase = CountX * (ry + CountY * rz);
                 if (!Periodic)
                 {
                     xLo = Math.Max(xLo, 0); xHi = Math.Min(xHi, CountX - 1);
-                    ScanRange(CellStart[rowBase + xLo], CellStart[rowBase + xHi + 1], -x, sy, sz, innerSquared, outerSquared, exclude, true, buffer);
+                    buffer.AppendRange(this, CellStart[rowBase + xLo], CellStart[rowBase + xHi + 1], -x, sy, sz, innerSquared, outerSquared, excludeSlot);
                     continue;
                 }
                 // Periodic rows may wrap, possibly several times for small grids: one contiguous run per period.
@@ -295,7 +297,7 @@ public sealed class PointGrid
                     int runEnd = Math.Min(xHi, (wx + 1) * CountX - 1);
                     int rxEnd = runEnd - wx * CountX;
                     bool zero = wx == 0 && wy == 0 && wz == 0;
-                    ScanRange(CellStart[rowBase + rx], CellStart[rowBase + rxEnd + 1], wx * LengthX - x, sy, sz, innerSquared, outerSquared, exclude, zero, buffer);
+                    buffer.AppendRange(this, CellStart[rowBase + rx], CellStart[rowBase + rxEnd + 1], wx * LengthX - x, sy, sz, innerSquared, outerSquared, zero ? excludeSlot : -1);
                     cx = runEnd + 1;
                 }
             }
@@ -303,25 +305,11 @@ public sealed class PointGrid
         return buffer.Count - before;
     }
 
-    private void ScanRange(int from, int to, double ox, double oy, double oz, double inner2, double outer2, int exclude, bool zeroShift, NeighbourBuffer buffer)
-    {
-        if (from >= to) return;
-        int before = buffer.Count;
-        buffer.AppendRange(this, from, to, ox, oy, oz, inner2, outer2);
-        if (!zeroShift || exclude < 0) return;
-        // Drop the excluded point (at most one hit) from what was just appended.
-        var slots = buffer.Slot;
-        for (int i = before; i < buffer.Count; i++)
-        {
-            if (SortedIndex[slots[i]] != exclude) continue;
-            buffer.RemoveAtSwap(i);
-            break;
-        }
-    }
-
     // Whole cells beyond the query's own cell needed to reach distance r when the query is `toFace` from the face.
-    private static int Reach(double r, double toFace, double h) => r <= toFace ? 0 : (int)Math.Ceiling((r - toFace) / h);
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static int Reach(double r, double toFace, double inverseSize) => r <= toFace ? 0 : (int)Math.Ceiling((r - toFace) * inverseSize);
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double Gap(int d, double f, double h) => d > 0 ? (d - 1) * h + (h - f) : d < 0 ? (-d - 1) * h + f : 0.0;
 
     private static int FloorDiv(int a, int b) => a >= 0 ? a / b : -((-a + b - 1) / b);

@@ -71,7 +71,7 @@ internal sealed class CellBuilder
         {
             double outer2 = outer * outer;
             buffer.Clear();
-            g.CollectInShell(gx, gy, gz, inner2, outer2, self, buffer);
+            g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
             var order = NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
