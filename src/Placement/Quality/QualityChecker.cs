@@ -1,0 +1,202 @@
+using Placement.Points;
+using Placement.Profiles;
+using Placement.Tessellation;
+
+namespace Placement.Quality;
+
+/// <summary>
+/// Measures a point set against its target profile on its Voronoi cells: ln(Vρ/m) per cell, Voronoi density in
+/// equal-mass radial bins, enclosed mass against M(r), and moving-mesh regularity; optionally the same for a
+/// baseline set (a Poisson set of equal N) so every number has a reference.
+/// </summary>
+/// <remarks>
+/// <para>m_i are the points' masses when they sum to more than zero, otherwise equal shares M_total/N of the
+/// profile mass (mesh-generating points before their masses are set). V_i ρ_target(r_i)/m_i = 1 for a set whose
+/// point density follows the profile exactly, so ln(Vρ/m) measures local density errors in natural units
+/// (0.1 ≈ 10 %).</para>
+/// <para>The profile is centred at the origin. Default domain: a ball at the origin just enclosing the profile
+/// and every point.</para>
+/// </remarks>
+public static class QualityChecker
+{
+    private static readonly double[] PercentileLevels = [1, 5, 25, 50, 75, 95, 99];
+
+    /// <summary>Measures <paramref name="points"/> against <paramref name="profile"/>.</summary>
+    /// <param name="points">The point set (profile length and mass units).</param>
+    /// <param name="profile">The target profile, centred at the origin.</param>
+    /// <param name="domain">Tessellation domain; a ball enclosing profile and points when null.</param>
+    /// <param name="options">Settings; <see cref="QualityOptions.Default"/> when null.</param>
+    /// <param name="baseline">A comparison set (e.g. Poisson with the same N, from any sampler), or null.</param>
+    /// <returns>The typed report.</returns>
+    /// <exception cref="ArgumentException">The point set is empty, or its units differ from the profile's.</exception>
+    public static QualityReport Evaluate(PointSet points, IRadialProfile profile, TessellationDomain? domain = null,
+        QualityOptions? options = null, PointSet? baseline = null)
+    {
+        ArgumentNullException.ThrowIfNull(points);
+        ArgumentNullException.ThrowIfNull(profile);
+        options ??= QualityOptions.Default;
+        if (points.Count == 0) throw new ArgumentException("The point set is empty.", nameof(points));
+        if (points.Units.Name != profile.Units.Name)
+            throw new ArgumentException($"Point units '{points.Units.Name}' differ from profile units '{profile.Units.Name}'.", nameof(points));
+        var report = EvaluateOne(points, profile, domain ?? EnclosingBall(points, profile, baseline), options);
+        if (baseline is null) return report;
+        var baseReport = EvaluateOne(baseline, profile, domain ?? EnclosingBall(points, profile, baseline), options);
+        return report with { Baseline = baseReport };
+    }
+
+    private static TessellationDomain EnclosingBall(PointSet points, IRadialProfile profile, PointSet? baseline)
+    {
+        double r = profile.OuterRadius;
+        for (int i = 0; i < points.Count; i++) r = Math.Max(r, points.Radius(i));
+        if (baseline is not null)
+            for (int i = 0; i < baseline.Count; i++) r = Math.Max(r, baseline.Radius(i));
+        return TessellationDomain.Sphere(0, 0, 0, r * (1 + 1e-9) + 1e-300);
+    }
+
+    private static QualityReport EvaluateOne(PointSet points, IRadialProfile profile, TessellationDomain domain, QualityOptions options)
+    {
+        int n = points.Count;
+        var cells = VoronoiTessellation.Compute(points, domain, options.Tessellation);
+        var radius = new double[n];
+        for (int i = 0; i < n; i++) radius[i] = points.Radius(i);
+        var rho = new double[n];
+        profile.Density(radius, rho);
+        double pointTotal = points.TotalMass();
+        bool usePointMasses = pointTotal > 0;
+        double share = profile.TotalMass / n;
+        var mass = new double[n];
+        for (int i = 0; i < n; i++) mass[i] = usePointMasses ? points.Mass[i] : share;
+
+        var logRatio = new double[n];
+        int outside = 0;
+        for (int i = 0; i < n; i++)
+        {
+            if (rho[i] > 0 && mass[i] > 0) logRatio[i] = Math.Log(cells.Volume[i] * rho[i] / mass[i]);
+            else { logRatio[i] = double.NaN; outside++; }
+        }
+        return new QualityReport(
+            n, profile.Fingerprint, domain.ToString(), profile.Units.LengthUnitName, profile.Units.MassUnitName,
+            usePointMasses ? "point masses" : "equal shares of the profile mass",
+            outside,
+            LogStatistics(logRatio, points, radius, cells, options.WorstCells),
+            Histogram.Of(logRatio, -options.HistogramRange, options.HistogramRange, options.HistogramBins),
+            RadialDensity(profile, radius, mass, cells.Volume, options.RadialBins),
+            Enclosed(profile, radius, mass, options.RadialBins),
+            Regularity(cells, options),
+            options.KeepPerPointValues ? logRatio : null,
+            null);
+    }
+
+    private static LogRatioStatistics LogStatistics(double[] logRatio, PointSet points, double[] radius, VoronoiCells cells, int worstCount)
+    {
+        var finite = logRatio.Where(double.IsFinite).ToArray();
+        int m = finite.Length;
+        if (m == 0) return new LogRatioStatistics(0, double.NaN, double.NaN, double.NaN, PercentileLevels, PercentileLevels.Select(_ => double.NaN).ToArray(), double.NaN, []);
+        double mean = finite.Average();
+        double variance = 0, square = 0;
+        foreach (double v in finite) { variance += (v - mean) * (v - mean); square += v * v; }
+        Array.Sort(finite);
+        var values = PercentileLevels.Select(p => Percentile(finite, p)).ToArray();
+        double maxAbs = Math.Max(Math.Abs(finite[0]), Math.Abs(finite[^1]));
+        var worst = Enumerable.Range(0, logRatio.Length)
+            .Where(i => double.IsFinite(logRatio[i]))
+            .OrderByDescending(i => Math.Abs(logRatio[i])).ThenBy(i => i)
+            .Take(worstCount)
+            .Select(i => new WorstCell(i, points.X[i], points.Y[i], points.Z[i], radius[i], logRatio[i], cells.Volume[i], cells.CutByDomain[i]))
+            .ToArray();
+        return new LogRatioStatistics(m, mean, Math.Sqrt(variance / m), Math.Sqrt(square / m), PercentileLevels, values, maxAbs, worst);
+    }
+
+    // Nearest-rank percentile of sorted values.
+    private static double Percentile(double[] sorted, double p)
+    {
+        int rank = (int)Math.Ceiling(p / 100.0 * sorted.Length);
+        return sorted[Math.Clamp(rank - 1, 0, sorted.Length - 1)];
+    }
+
+    private static double[] EqualMassEdges(IRadialProfile profile, int bins)
+    {
+        var edges = new double[bins + 1];
+        for (int k = 0; k <= bins; k++) edges[k] = k == bins ? profile.OuterRadius : profile.RadiusOfEnclosedMass(profile.TotalMass * k / bins);
+        edges[0] = 0;
+        return edges;
+    }
+
+    private static int BinOf(double[] edges, double r)
+    {
+        int k = Array.BinarySearch(edges, r);
+        if (k < 0) k = ~k - 1;
+        return k;
+    }
+
+    private static RadialDensityComparison RadialDensity(IRadialProfile profile, double[] radius, double[] mass, double[] volume, int bins)
+    {
+        var edges = EqualMassEdges(profile, bins);
+        var sumM = new double[bins]; var sumV = new double[bins]; var count = new int[bins];
+        for (int i = 0; i < radius.Length; i++)
+        {
+            int k = BinOf(edges, radius[i]);
+            if (k < 0 || k >= bins) continue;
+            sumM[k] += mass[i]; sumV[k] += volume[i]; count[k]++;
+        }
+        var target = new double[bins]; var measured = new double[bins]; var error = new double[bins];
+        double rms = 0, max = 0; int used = 0;
+        for (int k = 0; k < bins; k++)
+        {
+            double shell = 4.0 / 3.0 * Math.PI * (Math.Pow(edges[k + 1], 3) - Math.Pow(edges[k], 3));
+            target[k] = (profile.EnclosedMass(edges[k + 1]) - profile.EnclosedMass(edges[k])) / shell;
+            measured[k] = count[k] > 0 ? sumM[k] / sumV[k] : double.NaN;
+            error[k] = measured[k] / target[k] - 1;
+            if (!double.IsFinite(error[k])) continue;
+            rms += error[k] * error[k]; max = Math.Max(max, Math.Abs(error[k])); used++;
+        }
+        return new RadialDensityComparison(edges[..^1], edges[1..], target, measured, error, count, used > 0 ? Math.Sqrt(rms / used) : double.NaN, max);
+    }
+
+    private static EnclosedMassComparison Enclosed(IRadialProfile profile, double[] radius, double[] mass, int bins)
+    {
+        var edges = EqualMassEdges(profile, bins);
+        var order = Enumerable.Range(0, radius.Length).OrderBy(i => radius[i]).ToArray();
+        var r = edges[1..];
+        var model = new double[r.Length]; var points = new double[r.Length]; var relative = new double[r.Length];
+        double running = 0, maxTotal = 0, maxRelative = 0;
+        int next = 0;
+        for (int k = 0; k < r.Length; k++)
+        {
+            while (next < order.Length && radius[order[next]] <= r[k]) running += mass[order[next++]];
+            model[k] = profile.EnclosedMass(r[k]);
+            points[k] = running;
+            relative[k] = running / model[k] - 1;
+            maxTotal = Math.Max(maxTotal, Math.Abs(running - model[k]) / profile.TotalMass);
+            maxRelative = Math.Max(maxRelative, Math.Abs(relative[k]));
+        }
+        return new EnclosedMassComparison(r, model, points, relative, maxTotal, maxRelative);
+    }
+
+    private static RegularityStatistics Regularity(VoronoiCells cells, QualityOptions options)
+    {
+        var offsets = new List<double>(cells.Count);
+        var angles = new List<double>(cells.Count);
+        int overOffset = 0, overAngle = 0, overEither = 0;
+        double faces = 0;
+        for (int i = 0; i < cells.Count; i++)
+        {
+            if (cells.CutByDomain[i]) continue;
+            double d = cells.CentroidOffset[i] / cells.CellRadius(i), a = cells.MaxFaceAngleRatio[i];
+            offsets.Add(d); angles.Add(a);
+            bool o = d > options.OffsetThreshold, f = a > options.FaceAngleThreshold;
+            if (o) overOffset++;
+            if (f) overAngle++;
+            if (o || f) overEither++;
+            faces += cells.FaceCount[i];
+        }
+        int m = offsets.Count;
+        if (m == 0)
+            return new RegularityStatistics(0, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN,
+                options.OffsetThreshold, options.FaceAngleThreshold, double.NaN, double.NaN, double.NaN, double.NaN);
+        var so = offsets.ToArray(); Array.Sort(so);
+        var sa = angles.ToArray(); Array.Sort(sa);
+        return new RegularityStatistics(m, so.Average(), Percentile(so, 95), so[^1], sa.Average(), Percentile(sa, 95), sa[^1],
+            options.OffsetThreshold, options.FaceAngleThreshold, (double)overOffset / m, (double)overAngle / m, (double)overEither / m, faces / m);
+    }
+}

@@ -1,0 +1,110 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+
+namespace Placement.Spatial;
+
+/// <summary>
+/// A growable structure-of-arrays list of neighbours (sorted slot, squared distance, offset vector), filled by
+/// <see cref="PointGrid.CollectInShell"/> and reused across queries so hot loops allocate nothing.
+/// </summary>
+public sealed class NeighbourBuffer
+{
+    private int[] _slot;
+    private double[] _d2, _dx, _dy, _dz;
+
+    /// <summary>Creates a buffer with room for <paramref name="capacity"/> neighbours before it grows.</summary>
+    public NeighbourBuffer(int capacity = 128)
+    {
+        capacity = Math.Max(capacity, 4);
+        _slot = new int[capacity];
+        _d2 = new double[capacity]; _dx = new double[capacity]; _dy = new double[capacity]; _dz = new double[capacity];
+    }
+
+    /// <summary>Number of neighbours held.</summary>
+    public int Count { get; private set; }
+
+    /// <summary>Sorted grid slots of the neighbours.</summary>
+    public Span<int> Slot => _slot.AsSpan(0, Count);
+
+    /// <summary>Squared distances, length².</summary>
+    public Span<double> DistanceSquared => _d2.AsSpan(0, Count);
+
+    /// <summary>x of neighbour (image) minus x of the query, length units.</summary>
+    public Span<double> Dx => _dx.AsSpan(0, Count);
+
+    /// <summary>y difference, length units.</summary>
+    public Span<double> Dy => _dy.AsSpan(0, Count);
+
+    /// <summary>z difference, length units.</summary>
+    public Span<double> Dz => _dz.AsSpan(0, Count);
+
+    /// <summary>Empties the buffer (keeps its memory).</summary>
+    public void Clear() => Count = 0;
+
+    /// <summary>Appends one neighbour.</summary>
+    public void Add(int slot, double distanceSquared, double dx, double dy, double dz)
+    {
+        int i = Count;
+        if (i == _slot.Length) Grow();
+        _slot[i] = slot; _d2[i] = distanceSquared; _dx[i] = dx; _dy[i] = dy; _dz[i] = dz;
+        Count = i + 1;
+    }
+
+    /// <summary>Sorts the neighbours by increasing squared distance (insertion sort: buffers are short).</summary>
+    public void SortByDistance()
+    {
+        var d2 = _d2; var slot = _slot; var dx = _dx; var dy = _dy; var dz = _dz;
+        for (int i = 1; i < Count; i++)
+        {
+            double k = d2[i];
+            if (d2[i - 1] <= k) continue;
+            int s = slot[i]; double x = dx[i], y = dy[i], z = dz[i];
+            int j = i - 1;
+            while (j >= 0 && d2[j] > k)
+            {
+                d2[j + 1] = d2[j]; slot[j + 1] = slot[j]; dx[j + 1] = dx[j]; dy[j + 1] = dy[j]; dz[j + 1] = dz[j];
+                j--;
+            }
+            d2[j + 1] = k; slot[j + 1] = s; dx[j + 1] = x; dy[j + 1] = y; dz[j + 1] = z;
+        }
+    }
+
+    /// <summary>
+    /// Appends, without branches, the points of sorted slots [from, to) of <paramref name="grid"/> shifted by
+    /// (ox, oy, oz) (query subtracted) whose squared distance lies in [inner², outer²), except slot <paramref name="skip"/>.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal void AppendRange(PointGrid grid, int from, int to, double ox, double oy, double oz, double inner2, double outer2, int skip)
+    {
+        if (from >= to) return;
+        int need = Count + (to - from);
+        while (need > _slot.Length) Grow();
+        if ((uint)to > (uint)grid.SortedX.Length || from < 0) throw new InvalidOperationException("Grid slot range out of bounds.");
+        ref double px = ref MemoryMarshal.GetArrayDataReference(grid.SortedX);
+        ref double py = ref MemoryMarshal.GetArrayDataReference(grid.SortedY);
+        ref double pz = ref MemoryMarshal.GetArrayDataReference(grid.SortedZ);
+        ref int slot = ref MemoryMarshal.GetArrayDataReference(_slot);
+        ref double d2s = ref MemoryMarshal.GetArrayDataReference(_d2);
+        ref double dxs = ref MemoryMarshal.GetArrayDataReference(_dx);
+        ref double dys = ref MemoryMarshal.GetArrayDataReference(_dy);
+        ref double dzs = ref MemoryMarshal.GetArrayDataReference(_dz);
+        int c = Count;
+        for (int s = from; s < to; s++)
+        {
+            double dx = Unsafe.Add(ref px, s) + ox, dy = Unsafe.Add(ref py, s) + oy, dz = Unsafe.Add(ref pz, s) + oz;
+            double d2 = dx * dx + dy * dy + dz * dz;
+            // Write unconditionally, advance only when inside the shell: no unpredictable branch.
+            Unsafe.Add(ref slot, c) = s; Unsafe.Add(ref d2s, c) = d2;
+            Unsafe.Add(ref dxs, c) = dx; Unsafe.Add(ref dys, c) = dy; Unsafe.Add(ref dzs, c) = dz;
+            c += (d2 < outer2 ? 1 : 0) & (d2 >= inner2 ? 1 : 0) & (s != skip ? 1 : 0);
+        }
+        Count = c;
+    }
+
+    private void Grow()
+    {
+        int n = _slot.Length * 2;
+        Array.Resize(ref _slot, n);
+        Array.Resize(ref _d2, n); Array.Resize(ref _dx, n); Array.Resize(ref _dy, n); Array.Resize(ref _dz, n);
+    }
+}

@@ -1,0 +1,237 @@
+using Placement.Spatial;
+
+namespace Placement.Tessellation;
+
+/// <summary>
+/// Per-worker state of <see cref="VoronoiTessellation"/>: one <see cref="ConvexCell"/>, one neighbour search and
+/// the per-face scratch, reused for every cell of the worker's chunk.
+/// </summary>
+internal sealed class CellBuilder
+{
+    private static readonly int[] BoxCodes = [CellFaceCodes.WallMinX, CellFaceCodes.WallMaxX, CellFaceCodes.WallMinY, CellFaceCodes.WallMaxY, CellFaceCodes.WallMinZ, CellFaceCodes.WallMaxZ];
+    private static readonly int[] SphereCodes = [CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface];
+
+    private readonly PointGrid _grid;
+    private readonly TessellationDomain _domain;
+    private readonly TessellationOptions _options;
+    private readonly VoronoiCells _cells;
+    private readonly ConvexCell _cell = new();
+    private readonly NeighbourBuffer _buffer = new(256);
+    private readonly double _diagonal2;
+    private double _lastSecurity;
+    private int[] _order = new int[256];
+    private int[] _bucketOf = new int[256];
+    private readonly double _duplicate2;
+    private readonly int[] _selfCodes = new int[6];
+    private double[] _faceArea = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
+
+    public CellBuilder(PointGrid grid, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
+    {
+        _grid = grid;
+        _domain = domain;
+        _options = options;
+        _cells = cells;
+        _diagonal2 = grid.LengthX * grid.LengthX + grid.LengthY * grid.LengthY + grid.LengthZ * grid.LengthZ;
+        double dup = options.DuplicateTolerance * spacing;
+        _duplicate2 = dup * dup;
+    }
+
+    public long PlanesTested { get; private set; }
+
+    public long PlanesCut { get; private set; }
+
+    public void Build(int slot, FaceBuffer? faces)
+    {
+        var g = _grid;
+        int self = g.SortedIndex[slot];
+        double gx = g.SortedX[slot], gy = g.SortedY[slot], gz = g.SortedZ[slot];
+        var d = _domain;
+        var cell = _cell;
+        if (d.Kind == DomainKind.PeriodicBox)
+        {
+            // The cell lies within half a period of its generator: the bisectors with its own images.
+            Array.Fill(_selfCodes, self);
+            double hx = 0.5 * g.LengthX, hy = 0.5 * g.LengthY, hz = 0.5 * g.LengthZ;
+            cell.InitBox(-hx, -hy, -hz, hx, hy, hz, _selfCodes);
+        }
+        else
+        {
+            cell.InitBox(d.MinX - gx, d.MinY - gy, d.MinZ - gz, d.MaxX - gx, d.MaxY - gy, d.MaxZ - gz,
+                d.Kind == DomainKind.Sphere ? SphereCodes : BoxCodes);
+        }
+        cell.Tolerance = _options.ClipTolerance * Math.Sqrt(cell.MaxRadiusSquared);
+        // Gather neighbours in growing shells [r0, r1): the first radius follows the previous cell's security
+        // radius (consecutive cells are neighbours in space, so of similar size), later ones the current cell's.
+        double inner2 = 0;
+        double outer = _lastSecurity > 0 ? _lastSecurity : 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
+        bool first = true;
+        long tested = 0, cutCount = 0;
+        var buffer = _buffer;
+        while (true)
+        {
+            double outer2 = outer * outer;
+            buffer.Clear();
+            g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            var order = NearFirstOrder(buffer, inner2, outer2);
+            var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
+            for (int k = 0; k < order.Length; k++)
+            {
+                int q = order[k];
+                double d2 = dist2[q];
+                if (d2 >= 4.0 * cell.MaxRadiusSquared) continue;
+                int other = g.SortedIndex[slotOf[q]];
+                if (d2 <= _duplicate2)
+                    throw new ArgumentException(
+                        $"Points {Math.Min(self, other)} and {Math.Max(self, other)} coincide (distance {Math.Sqrt(d2)} at ({gx}, {gy}, {gz})); a Voronoi tessellation needs distinct generators: remove or merge duplicates first.");
+                if (first)
+                {
+                    // Tolerance from the first (near-nearest) neighbour: rounding scales with the cell size.
+                    cell.Tolerance = _options.ClipTolerance * Math.Sqrt(d2);
+                    first = false;
+                }
+                tested++;
+                if (cell.Clip(bx[q], by[q], bz[q], 0.5 * d2, other)) cutCount++;
+            }
+            double security2 = 4.0 * cell.MaxRadiusSquared;
+            if (security2 <= outer2 || (!g.Periodic && outer2 > _diagonal2)) break;
+            inner2 = outer2;
+            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
+            outer = Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
+        }
+        _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
+        if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz);
+        PlanesTested += tested;
+        PlanesCut += cutCount;
+        cell.BuildFaceRings();
+        Measure(self, gx, gy, gz, faces);
+    }
+
+    // Indices of the buffer's neighbours in near-first order: 16 buckets of equal width in d² over the shell
+    // [inner², outer²), unsorted within a bucket. Exact order is not needed for correctness (the cell is complete
+    // only once every point inside the security radius was used); near-first only keeps the cell small early.
+    private ReadOnlySpan<int> NearFirstOrder(NeighbourBuffer buffer, double inner2, double outer2)
+    {
+        const int buckets = 16;
+        int n = buffer.Count;
+        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
+        Span<int> start = stackalloc int[buckets + 1];
+        start.Clear();
+        var d2 = buffer.DistanceSquared;
+        double scale = buckets / (outer2 - inner2);
+        for (int i = 0; i < n; i++)
+        {
+            int k = Math.Clamp((int)((d2[i] - inner2) * scale), 0, buckets - 1);
+            _bucketOf[i] = k;
+            start[k + 1]++;
+        }
+        for (int k = 0; k < buckets; k++) start[k + 1] += start[k];
+        for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
+        return _order.AsSpan(0, n);
+    }
+
+    private void ClipToSphere(double gx, double gy, double gz)
+    {
+        var d = _domain;
+        var cell = _cell;
+        double r = d.Radius, limit2 = r * r * (1 + _options.SphereTolerance) * (1 + _options.SphereTolerance);
+        double ox = gx - d.CenterX, oy = gy - d.CenterY, oz = gz - d.CenterZ;
+        for (int iteration = 0; iteration < 100_000; iteration++)
+        {
+            var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
+            double best = -1; int bestT = -1;
+            for (int t = 0; t < vx.Length; t++)
+            {
+                double px = vx[t] + ox, py = vy[t] + oy, pz = vz[t] + oz;
+                double q = px * px + py * py + pz * pz;
+                if (q > best) { best = q; bestT = t; }
+            }
+            if (best <= limit2) return;
+            double len = Math.Sqrt(best);
+            double nx = (vx[bestT] + ox) / len, ny = (vy[bestT] + oy) / len, nz = (vz[bestT] + oz) / len;
+            // Tangent plane n·(x − c) ≤ R, in generator-relative coordinates n·v ≤ R − n·(g − c).
+            if (!cell.Clip(nx, ny, nz, r - (nx * ox + ny * oy + nz * oz), CellFaceCodes.SphereSurface))
+                throw new InvalidOperationException($"A tangent plane failed to cut a vertex at distance {len} of a sphere of radius {r}.");
+        }
+        throw new InvalidOperationException("Sphere clipping did not converge; raise SphereTolerance.");
+    }
+
+    private void Measure(int self, double gx, double gy, double gz, FaceBuffer? faces)
+    {
+        var cell = _cell;
+        int planes = cell.PlaneCount;
+        if (_faceArea.Length < planes)
+        {
+            int m = Math.Max(planes, 2 * _faceArea.Length);
+            _faceArea = new double[m]; _faceCx = new double[m]; _faceCy = new double[m]; _faceCz = new double[m];
+        }
+        var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var dd = cell.D;
+        var start = cell.RingStart; var ring = cell.Ring;
+        var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
+        double volume = 0, mx = 0, my = 0, mz = 0;
+        for (int p = 0; p < planes; p++)
+        {
+            int s = start[p], e = start[p + 1];
+            _faceArea[p] = 0;
+            if (e - s < 3) continue;
+            double inv = 1.0 / Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
+            double ux = nx[p] * inv, uy = ny[p] * inv, uz = nz[p] * inv;
+            int t0 = ring[s];
+            double ax = vx[t0], ay = vy[t0], az = vz[t0];
+            double area = 0, cx = 0, cy = 0, cz = 0;
+            for (int k = s + 1; k < e - 1; k++)
+            {
+                int t1 = ring[k], t2 = ring[k + 1];
+                double bx = vx[t1] - ax, by = vy[t1] - ay, bz = vz[t1] - az;
+                double qx = vx[t2] - ax, qy = vy[t2] - ay, qz = vz[t2] - az;
+                // Signed area along the face normal (consistent sign for a convex face).
+                double a2 = (by * qz - bz * qy) * ux + (bz * qx - bx * qz) * uy + (bx * qy - by * qx) * uz;
+                area += a2;
+                cx += a2 * (vx[t1] + vx[t2]);
+                cy += a2 * (vy[t1] + vy[t2]);
+                cz += a2 * (vz[t1] + vz[t2]);
+            }
+            if (area == 0) continue;
+            // Face centroid = a + Σ a_k (b_k + c_k − 2a)/(3 Σ a_k) with b, c absolute: fold the a terms in.
+            double fcx = (cx / area + ax) / 3.0, fcy = (cy / area + ay) / 3.0, fcz = (cz / area + az) / 3.0;
+            area = 0.5 * Math.Abs(area);
+            double h = dd[p] * inv;
+            double vf = area * h / 3.0;
+            volume += vf;
+            mx += vf * fcx; my += vf * fcy; mz += vf * fcz;
+            _faceArea[p] = area;
+            _faceCx[p] = fcx; _faceCy[p] = fcy; _faceCz[p] = fcz;
+        }
+        // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
+        double cxr = 0.75 * mx / volume, cyr = 0.75 * my / volume, czr = 0.75 * mz / volume;
+        double minArea = _options.FaceAreaTolerance * Math.Pow(volume, 2.0 / 3.0);
+        int faceCount = 0;
+        bool cut = false;
+        double worst = 0;
+        var neighbour = cell.Neighbour;
+        for (int p = 0; p < planes; p++)
+        {
+            double area = _faceArea[p];
+            if (!(area > minArea)) continue;
+            faceCount++;
+            int code = neighbour[p];
+            if (code < 0) cut = true;
+            else
+            {
+                double h = dd[p] / Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
+                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / h);
+            }
+            faces?.Add(code, area);
+        }
+        var c = _cells;
+        c.Volume[self] = volume;
+        c.CentroidX[self] = gx + cxr;
+        c.CentroidY[self] = gy + cyr;
+        c.CentroidZ[self] = gz + czr;
+        c.CentroidOffset[self] = Math.Sqrt(cxr * cxr + cyr * cyr + czr * czr);
+        c.FaceCount[self] = faceCount;
+        c.MaxFaceAngleRatio[self] = worst;
+        c.CutByDomain[self] = cut;
+        if (c.Mass is not null)
+            c.Mass[self] = CellMassQuadrature.CellMass(cell, gx, gy, gz, _options.MassProfile!, _options.MassQuadratureAngle);
+    }
+}

@@ -1,0 +1,381 @@
+using System.Numerics;
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics;
+
+namespace Placement.Tessellation;
+
+/// <summary>
+/// A convex polyhedron around a generator at the origin, kept as the dual triangulation of its faces and clipped
+/// plane by plane: the per-thread workhorse of <see cref="VoronoiTessellation"/>.
+/// </summary>
+/// <remarks>
+/// <para>Method: Ray, Sokolov, Lefebvre &amp; Lévy 2018, "Meshless Voronoi on the GPU", ACM TOG 37(6) — a cell is a
+/// list of planes n·x ≤ d and a list of triangles (a, b, c) of plane indices, one per cell vertex (the point where
+/// the three planes meet), oriented counter-clockwise seen from outside. Clipping by a new plane removes the
+/// triangles whose vertex lies beyond it, finds the boundary cycle of the removed patch (edges not shared by two
+/// removed triangles) and fans new triangles (x, y, new) over it. Nothing else is stored: no adjacency to rebuild.</para>
+/// <para>Robustness: a vertex is removed only if it lies beyond the plane by more than <c>Tolerance</c> (a length,
+/// relative to the cell size), so planes through existing vertices (co-spherical neighbours, lattices) leave the
+/// cell unchanged and add no face. If rounding ever makes the removed patch not a disc, the clip is retried with a
+/// larger tolerance; if that fails too an exception names the generator.</para>
+/// <para>Memory: capacity grows on demand; a typical cell (16 planes, 28 vertices) touches about 3 KB, held once per
+/// thread. Coordinates are relative to the generator, which keeps rounding relative to the cell size.</para>
+/// </remarks>
+internal sealed class ConvexCell
+{
+    private double[] _nx = new double[64], _ny = new double[64], _nz = new double[64], _d = new double[64];
+    private int[] _neighbour = new int[64];
+    private int _planeCount;
+
+    private int[] _ta = new int[128], _tb = new int[128], _tc = new int[128];
+    private double[] _vx = new double[128], _vy = new double[128], _vz = new double[128], _vr2 = new double[128];
+    private int _triCount;
+
+    private ulong[] _removed = new ulong[2];
+    private int[] _edgeKey = new int[384];
+    private readonly ulong[] _outMask = new ulong[64], _inMask = new ulong[64];
+    private int[] _next = new int[64], _nextStamp = new int[64];
+    private int _stamp;
+
+    public int PlaneCount => _planeCount;
+
+    public int TriangleCount => _triCount;
+
+    /// <summary>Largest squared distance from the generator to a vertex.</summary>
+    public double MaxRadiusSquared { get; private set; }
+
+    /// <summary>Absolute tolerance (length units) below which a vertex counts as on a plane.</summary>
+    public double Tolerance { get; set; }
+
+    public ReadOnlySpan<double> Nx => _nx.AsSpan(0, _planeCount);
+    public ReadOnlySpan<double> Ny => _ny.AsSpan(0, _planeCount);
+    public ReadOnlySpan<double> Nz => _nz.AsSpan(0, _planeCount);
+    public ReadOnlySpan<double> D => _d.AsSpan(0, _planeCount);
+    public ReadOnlySpan<int> Neighbour => _neighbour.AsSpan(0, _planeCount);
+    public ReadOnlySpan<int> Ta => _ta.AsSpan(0, _triCount);
+    public ReadOnlySpan<int> Tb => _tb.AsSpan(0, _triCount);
+    public ReadOnlySpan<int> Tc => _tc.AsSpan(0, _triCount);
+    public ReadOnlySpan<double> Vx => _vx.AsSpan(0, _triCount);
+    public ReadOnlySpan<double> Vy => _vy.AsSpan(0, _triCount);
+    public ReadOnlySpan<double> Vz => _vz.AsSpan(0, _triCount);
+
+    /// <summary>
+    /// Resets to the box [lo, hi] (relative to the generator; lo &lt; 0 &lt; hi not required but lo &lt; hi), with
+    /// face neighbour codes for −x, +x, −y, +y, −z, +z.
+    /// </summary>
+    public void InitBox(double lox, double loy, double loz, double hix, double hiy, double hiz, ReadOnlySpan<int> codes)
+    {
+        _planeCount = 0;
+        AddPlane(-1, 0, 0, -lox, codes[0]);
+        AddPlane(1, 0, 0, hix, codes[1]);
+        AddPlane(0, -1, 0, -loy, codes[2]);
+        AddPlane(0, 1, 0, hiy, codes[3]);
+        AddPlane(0, 0, -1, -loz, codes[4]);
+        AddPlane(0, 0, 1, hiz, codes[5]);
+        _triCount = 0;
+        double max = 0;
+        for (int corner = 0; corner < 8; corner++)
+        {
+            int sx = corner & 1, sy = (corner >> 1) & 1, sz = (corner >> 2) & 1;
+            int a = sx, b = 2 + sy, c = 4 + sz;
+            // Orientation: (n_a × n_b)·n_c > 0 seen from outside; the normals' signs multiply.
+            int sign = (sx == 1 ? 1 : -1) * (sy == 1 ? 1 : -1) * (sz == 1 ? 1 : -1);
+            if (sign < 0) (a, b) = (b, a);
+            double x = sx == 1 ? hix : lox, y = sy == 1 ? hiy : loy, z = sz == 1 ? hiz : loz;
+            _ta[_triCount] = a; _tb[_triCount] = b; _tc[_triCount] = c;
+            _vx[_triCount] = x; _vy[_triCount] = y; _vz[_triCount] = z; _vr2[_triCount] = x * x + y * y + z * z;
+            _triCount++;
+            max = Math.Max(max, x * x + y * y + z * z);
+        }
+        MaxRadiusSquared = max;
+    }
+
+    private int AddPlane(double nx, double ny, double nz, double d, int neighbour)
+    {
+        if (_planeCount == _nx.Length) GrowPlanes();
+        if (_planeCount >= short.MaxValue) throw new InvalidOperationException("A cell exceeded 32767 planes (edge keys pack plane indices in 16 bits).");
+        int p = _planeCount++;
+        _nx[p] = nx; _ny[p] = ny; _nz[p] = nz; _d[p] = d; _neighbour[p] = neighbour;
+        return p;
+    }
+
+    /// <summary>
+    /// Clips by the half-space n·x ≤ d. Returns true when the plane cut the cell (and became a face).
+    /// </summary>
+    /// <exception cref="InvalidOperationException">Rounding made the clip inconsistent even with a larger tolerance.</exception>
+    public bool Clip(double nx, double ny, double nz, double d, int neighbour)
+    {
+        double norm = Math.Sqrt(nx * nx + ny * ny + nz * nz);
+        double eps = Tolerance * norm;
+        // Quick rejection: no vertex can lie beyond a plane farther than the farthest vertex.
+        double reach = d - eps;
+        if (reach > 0 && reach * reach > MaxRadiusSquared * norm * norm) return false;
+        for (int attempt = 0; attempt < 4; attempt++)
+        {
+            int r = Classify(nx, ny, nz, d + eps);
+            if (r == 0) return false;
+            if (r == _triCount)
+                throw new InvalidOperationException("A clipping plane removed the whole cell; the generator lies outside its own half-space.");
+            if (TryRebuild(nx, ny, nz, d, neighbour)) return true;
+            eps *= 64;
+        }
+        throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance (degenerate input beyond double precision).");
+    }
+
+    // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.
+    private int Classify(double nx, double ny, double nz, double limit)
+    {
+        int removed = 0, t = 0, count = _triCount;
+        var rm = _removed;
+        // Clear every word: triangles appended by the rebuild may land in words beyond the current count.
+        Array.Clear(rm);
+        if (Vector256.IsHardwareAccelerated)
+        {
+            var vnx = Vector256.Create(nx); var vny = Vector256.Create(ny); var vnz = Vector256.Create(nz); var vl = Vector256.Create(limit);
+            ref double px = ref MemoryMarshal.GetArrayDataReference(_vx);
+            ref double py = ref MemoryMarshal.GetArrayDataReference(_vy);
+            ref double pz = ref MemoryMarshal.GetArrayDataReference(_vz);
+            for (; t + 4 <= count; t += 4)
+            {
+                var dot = vnx * Vector256.LoadUnsafe(ref px, (nuint)t) + vny * Vector256.LoadUnsafe(ref py, (nuint)t) + vnz * Vector256.LoadUnsafe(ref pz, (nuint)t);
+                uint bits = Vector256.GreaterThan(dot, vl).ExtractMostSignificantBits();
+                if (bits == 0) continue;
+                rm[t >> 6] |= (ulong)bits << (t & 63);
+                removed += BitOperations.PopCount(bits);
+            }
+        }
+        var vx = _vx; var vy = _vy; var vz = _vz;
+        for (; t < count; t++)
+        {
+            if (nx * vx[t] + ny * vy[t] + nz * vz[t] > limit)
+            {
+                rm[t >> 6] |= 1UL << (t & 63);
+                removed++;
+            }
+        }
+        return removed;
+    }
+
+    // First removed slot at or after word `word` (advanced past empty words), or −1.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private int NextRemoved(ref int word)
+    {
+        var rm = _removed;
+        int words = (_triCount + 63) >> 6;
+        for (; word < words; word++)
+        {
+            ulong bits = rm[word];
+            if (bits != 0) return (word << 6) + BitOperations.TrailingZeroCount(bits);
+        }
+        return -1;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private bool IsRemoved(int t) => (_removed[t >> 6] & (1UL << (t & 63))) != 0;
+
+    private bool TryRebuild(double nx, double ny, double nz, double d, int neighbour)
+    {
+        if (_next.Length < _planeCount + 1) GrowScratchPlanes(_planeCount + 1);
+        int stamp = ++_stamp;
+        int boundary = 0, first = -1;
+        bool ok = _planeCount <= 64 ? BoundaryByMasks(stamp, ref boundary, ref first) : BoundaryByEdges(stamp, ref boundary, ref first);
+        if (!ok || boundary < 3) return false;
+        // Walk the cycle once to check it is a single loop through every boundary edge.
+        int steps = 0, x = first;
+        do
+        {
+            if (_nextStamp[x] != stamp) return false;
+            x = _next[x];
+            steps++;
+        } while (x != first && steps <= boundary);
+        if (steps != boundary || x != first) return false;
+
+        int p = AddPlane(nx, ny, nz, d, neighbour);
+        // Fill removed slots with the new triangles (x, next[x], p), append the rest.
+        int slot = 0; // word cursor into _removed
+        x = first;
+        for (int k = 0; k < boundary; k++)
+        {
+            int y = _next[x];
+            int t = NextRemoved(ref slot);
+            if (t >= 0) _removed[t >> 6] &= ~(1UL << (t & 63));
+            else
+            {
+                if (_triCount == _ta.Length) GrowTriangles();
+                t = _triCount++;
+            }
+            _ta[t] = x; _tb[t] = y; _tc[t] = p;
+            SetVertex(t, x, y, p);
+            x = y;
+        }
+        // Remaining removed slots (the patch had interior vertices): compact, keeping order.
+        if (NextRemoved(ref slot) >= 0)
+        {
+            int write = 0;
+            for (int t = 0; t < _triCount; t++)
+            {
+                if (IsRemoved(t)) continue;
+                if (write != t) MoveTriangle(t, write);
+                write++;
+            }
+            _triCount = write;
+        }
+        double max = 0;
+        var r2 = _vr2;
+        for (int t = 0; t < _triCount; t++) if (r2[t] > max) max = r2[t];
+        MaxRadiusSquared = max;
+        return true;
+    }
+
+    // Boundary of the removed patch when every plane index fits a 64-bit mask: for each plane x, the removed
+    // triangles (x, q, r) give out-edges x→q and in-edges r→x; the boundary edge leaving x is the out-edge whose
+    // target is not also an in-edge source. O(removed triangles).
+    private bool BoundaryByMasks(int stamp, ref int boundary, ref int first)
+    {
+        var outMask = _outMask; var inMask = _inMask;
+        ulong touched = 0;
+        int words = (_triCount + 63) >> 6;
+        for (int w = 0; w < words; w++)
+        for (ulong bits = _removed[w]; bits != 0; bits &= bits - 1)
+        {
+            int t = (w << 6) + BitOperations.TrailingZeroCount(bits);
+            int a = _ta[t], b = _tb[t], c = _tc[t];
+            outMask[a] |= 1UL << b; inMask[a] |= 1UL << c;
+            outMask[b] |= 1UL << c; inMask[b] |= 1UL << a;
+            outMask[c] |= 1UL << a; inMask[c] |= 1UL << b;
+            touched |= (1UL << a) | (1UL << b) | (1UL << c);
+        }
+        bool ok = true;
+        while (touched != 0)
+        {
+            int x = BitOperations.TrailingZeroCount(touched);
+            touched &= touched - 1;
+            ulong leaving = outMask[x] & ~inMask[x];
+            outMask[x] = 0; inMask[x] = 0;
+            if (leaving == 0) continue;
+            if ((leaving & (leaving - 1)) != 0) { ok = false; continue; } // two boundary edges leave x: not a disc
+            _nextStamp[x] = stamp;
+            _next[x] = BitOperations.TrailingZeroCount(leaving);
+            boundary++;
+            first = x;
+        }
+        return ok;
+    }
+
+    // General boundary search for cells with more than 64 planes: edges packed (from << 16 | to), a boundary edge
+    // is one whose reverse is not an edge of another removed triangle. O(edges²) but vectorised.
+    private bool BoundaryByEdges(int stamp, ref int boundary, ref int first)
+    {
+        int e = 0;
+        for (int t = 0; t < _triCount; t++)
+        {
+            if (!IsRemoved(t)) continue;
+            if (e + 3 > _edgeKey.Length) Array.Resize(ref _edgeKey, _edgeKey.Length * 2);
+            int a = _ta[t], b = _tb[t], c = _tc[t];
+            _edgeKey[e++] = (a << 16) | b;
+            _edgeKey[e++] = (b << 16) | c;
+            _edgeKey[e++] = (c << 16) | a;
+        }
+        var keys = _edgeKey.AsSpan(0, e);
+        for (int i = 0; i < e; i++)
+        {
+            int key = keys[i];
+            int from = key >> 16, to = key & 0xFFFF;
+            if (keys.Contains((to << 16) | from)) continue;
+            if (_nextStamp[from] == stamp) return false;
+            _nextStamp[from] = stamp;
+            _next[from] = to;
+            boundary++;
+            first = from;
+        }
+        return true;
+    }
+
+    private void MoveTriangle(int from, int to)
+    {
+        _ta[to] = _ta[from]; _tb[to] = _tb[from]; _tc[to] = _tc[from];
+        _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private void SetVertex(int t, int a, int b, int c)
+    {
+        // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)).
+        double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], cx = _nx[c], cy = _ny[c], cz = _nz[c];
+        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
+        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
+        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
+        double det = ax * bcx + ay * bcy + az * bcz;
+        double da = _d[a], db = _d[b], dc = _d[c];
+        double inv = 1.0 / det;
+        _vx[t] = (da * bcx + db * cax + dc * abx) * inv;
+        _vy[t] = (da * bcy + db * cay + dc * aby) * inv;
+        _vz[t] = (da * bcz + db * caz + dc * abz) * inv;
+        _vr2[t] = _vx[t] * _vx[t] + _vy[t] * _vy[t] + _vz[t] * _vz[t];
+    }
+
+    // Face rings: for plane p, the triangles around its face in order, Ring[RingStart[p] .. RingStart[p+1]).
+    private int[] _ringStart = new int[65], _ring = new int[384], _entQ = new int[384], _entR = new int[384], _succ = new int[64], _triOf = new int[64];
+
+    public ReadOnlySpan<int> RingStart => _ringStart.AsSpan(0, _planeCount + 1);
+
+    public ReadOnlySpan<int> Ring => _ring.AsSpan(0, 3 * _triCount);
+
+    /// <summary>Orders the vertices (triangles) of every face; faces that vanished get an empty ring.</summary>
+    public void BuildFaceRings()
+    {
+        int planes = _planeCount, corners = 3 * _triCount;
+        if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
+        if (_ring.Length < corners)
+        {
+            int n = Math.Max(corners, 2 * _ring.Length);
+            Array.Resize(ref _ring, n); Array.Resize(ref _entQ, n); Array.Resize(ref _entR, n);
+        }
+        if (_succ.Length < planes) { Array.Resize(ref _succ, 2 * planes); Array.Resize(ref _triOf, 2 * planes); }
+        var start = _ringStart;
+        Array.Clear(start, 0, planes + 1);
+        for (int t = 0; t < _triCount; t++) { start[_ta[t] + 1]++; start[_tb[t] + 1]++; start[_tc[t] + 1]++; }
+        for (int p = 0; p < planes; p++) start[p + 1] += start[p];
+        // Scatter corners (p; q, r, t) grouped by p, using _ring as the fill cursor's output for t.
+        Span<int> fill = planes <= 256 ? stackalloc int[planes] : new int[planes];
+        for (int t = 0; t < _triCount; t++)
+        {
+            int a = _ta[t], b = _tb[t], c = _tc[t];
+            int k = start[a] + fill[a]++; _entQ[k] = b; _entR[k] = c; _ring[k] = t;
+            k = start[b] + fill[b]++; _entQ[k] = c; _entR[k] = a; _ring[k] = t;
+            k = start[c] + fill[c]++; _entQ[k] = a; _entR[k] = b; _ring[k] = t;
+        }
+        for (int p = 0; p < planes; p++)
+        {
+            int s = start[p], e = start[p + 1];
+            if (e - s < 3) continue;
+            for (int k = s; k < e; k++) { _succ[_entQ[k]] = _entR[k]; _triOf[_entQ[k]] = _ring[k]; }
+            // In triangle (p, q, r) the face p runs from neighbour q to neighbour r; follow r to the next triangle.
+            int q = _entQ[s];
+            for (int k = s; k < e; k++) { _ring[k] = _triOf[q]; q = _succ[q]; }
+        }
+    }
+
+    private void GrowPlanes()
+    {
+        int n = _nx.Length * 2;
+        Array.Resize(ref _nx, n); Array.Resize(ref _ny, n); Array.Resize(ref _nz, n); Array.Resize(ref _d, n);
+        Array.Resize(ref _neighbour, n);
+    }
+
+    private void GrowScratchPlanes(int min)
+    {
+        int n = Math.Max(min, _next.Length * 2);
+        Array.Resize(ref _next, n);
+        Array.Resize(ref _nextStamp, n);
+    }
+
+    private void GrowTriangles()
+    {
+        int n = _ta.Length * 2;
+        Array.Resize(ref _ta, n); Array.Resize(ref _tb, n); Array.Resize(ref _tc, n);
+        Array.Resize(ref _vx, n); Array.Resize(ref _vy, n); Array.Resize(ref _vz, n); Array.Resize(ref _vr2, n);
+        Array.Resize(ref _removed, (n + 63) >> 6);
+    }
+}

@@ -1,0 +1,114 @@
+using Placement.Points;
+using Placement.Profiles;
+using Placement.Quality;
+using Placement.Random;
+using Placement.Tessellation;
+using Placement.Tests.Tessellation;
+using Placement.Units;
+
+namespace Placement.Tests.Quality;
+
+public class QualityCheckerTests
+{
+    private static PointSet Set((double[] X, double[] Y, double[] Z) p, double mass)
+    {
+        var set = new PointSet(p.X.Length, UnitSystem.Dimensionless);
+        p.X.CopyTo(set.X, 0); p.Y.CopyTo(set.Y, 0); p.Z.CopyTo(set.Z, 0);
+        Array.Fill(set.Mass, mass);
+        return set;
+    }
+
+    // Points drawn from the profile itself: r = r(uM) (inverse of M) and a uniform direction, keyed by index.
+    private static PointSet SampleProfile(IRadialProfile profile, int n, ulong seed)
+    {
+        var set = new PointSet(n, UnitSystem.Dimensionless);
+        for (int i = 0; i < n; i++)
+        {
+            var rng = new KeyedRandom(seed, (ulong)i);
+            double r = profile.RadiusOfEnclosedMass(profile.TotalMass * rng.NextDouble());
+            double cz = 2 * rng.NextDouble() - 1, phi = 2 * Math.PI * rng.NextDouble(), s = Math.Sqrt(1 - cz * cz);
+            set.X[i] = r * s * Math.Cos(phi); set.Y[i] = r * s * Math.Sin(phi); set.Z[i] = r * cz;
+            set.Mass[i] = profile.TotalMass / n;
+        }
+        return set;
+    }
+
+    [Fact]
+    public void BccLattice_InUniformDensity_HasZeroLogRatioAndKnownFaceAngles_PoissonBaselineDoesNot()
+    {
+        // A uniform sphere large enough to cover the periodic box [0, 6)³: ρ constant in the box.
+        var profile = new UniformSphere(1000.0, 20.0);
+        double rho = profile.Density(0);
+        const int m = 6;
+        var lattice = Set(TestPoints.Lattice(m, TestPoints.Bcc, 0.25), rho * 0.5); // BCC cell volume 1/2 (a = 1)
+        var poisson = Set(TestPoints.Uniform(lattice.Count, 71, 0, m), rho * 0.5);
+        var report = QualityChecker.Evaluate(lattice, profile, TessellationDomain.PeriodicBox(0, 0, 0, m, m, m), baseline: poisson);
+
+        Assert.Equal(lattice.Count, report.LogRatio.Count);
+        Assert.True(report.LogRatio.MaxAbsolute < 1e-12);
+        Assert.Equal(0.0, report.Regularity.FractionCorrected);
+        Assert.True(report.Regularity.OffsetMax < 1e-12);
+        // BCC hexagonal face: area (3√3/2)(√2/4)² at distance √3/4 ⇒ √(A/π)/h = 0.742517 [computed].
+        double hexArea = 1.5 * Math.Sqrt(3) * 0.125, expected = Math.Sqrt(hexArea / Math.PI) / (Math.Sqrt(3) / 4);
+        Assert.Equal(expected, report.Regularity.FaceAngleMax, 10);
+        Assert.Equal(14.0, report.Regularity.MeanFaces, 12);
+
+        var b = report.Baseline!;
+        // Poisson–Voronoi volumes: var(V/<V>) ≈ 0.179 (reference notes §9) ⇒ sd of ln V ≈ 0.44 under the usual
+        // gamma approximation (approximate, so only a loose range is asserted).
+        Assert.InRange(b.LogRatio.StandardDeviation, 0.3, 0.6);
+        Assert.True(b.Regularity.FractionCorrected > 0.5);
+        Assert.Null(b.Baseline);
+    }
+
+    [Fact]
+    public void PointsDrawnFromPlummer_MatchDensityAndEnclosedMassWithinSamplingNoise()
+    {
+        var profile = new TruncatedPlummer(1.0, 0.25, 1.0);
+        const int n = 20000;
+        var points = SampleProfile(profile, n, 73);
+        var report = QualityChecker.Evaluate(points, profile);
+        // Poisson sampling: 1000 points per equal-mass bin, sd of a bin's summed volume ≈ 0.42/√1000 = 1.3 %;
+        // allow 4 % rms and 8 % max (the centre and edge bins are the noisiest).
+        Assert.InRange(report.RadialDensity.RmsError, 0, 0.04);
+        Assert.InRange(report.RadialDensity.MaxError, 0, 0.08);
+        // Enclosed mass of radii drawn from M(r): sup deviation ~ 1.36/√N = 0.0096 at 95 % (Kolmogorov); allow 0.02.
+        Assert.InRange(report.EnclosedMass.MaxErrorOfTotal, 0, 0.02);
+        // ln(Vρ/m) of a Poisson-like set centres near zero with sd ≈ 0.4–0.5.
+        Assert.InRange(report.LogRatio.StandardDeviation, 0.3, 0.7);
+        Assert.Equal("point masses", report.MassSource);
+        Assert.Equal(20, report.RadialDensity.Target.Length);
+        Assert.Equal(n, report.PerPointLogRatio!.Length);
+        int histogramTotal = report.LogRatioHistogram.Counts.Sum() + report.LogRatioHistogram.Below + report.LogRatioHistogram.Above;
+        Assert.Equal(report.LogRatio.Count, histogramTotal);
+    }
+
+    [Fact]
+    public void ZeroMasses_UseEqualSharesOfTheProfileMass()
+    {
+        var profile = new TruncatedPlummer(1.0, 0.25, 1.0);
+        var points = SampleProfile(profile, 3000, 79);
+        Array.Clear(points.Mass);
+        var report = QualityChecker.Evaluate(points, profile);
+        Assert.Equal("equal shares of the profile mass", report.MassSource);
+        Assert.Equal(1.0, report.EnclosedMass.PointMass[^1] / profile.TotalMass, 12);
+    }
+
+    [Fact]
+    public void Report_RoundTripsThroughJson()
+    {
+        var profile = new TruncatedPlummer(1.0, 0.25, 1.0);
+        var points = SampleProfile(profile, 2000, 83);
+        var baseline = SampleProfile(new UniformSphere(profile.TotalMass, 1.0), 2000, 89);
+        var report = QualityChecker.Evaluate(points, profile, baseline: baseline);
+        string json = QualityJson.Serialize(report);
+        Assert.Contains("\"logRatio\"", json, StringComparison.Ordinal);
+        Assert.Contains("\"baseline\"", json, StringComparison.Ordinal);
+        var back = QualityJson.Deserialize(json);
+        Assert.Equal(report.LogRatio.Mean, back.LogRatio.Mean);
+        Assert.Equal(report.RadialDensity.Measured, back.RadialDensity.Measured);
+        Assert.Equal(report.Baseline!.Regularity.FractionCorrected, back.Baseline!.Regularity.FractionCorrected);
+        Assert.Equal(report.LogRatio.Worst.Length, back.LogRatio.Worst.Length);
+        Assert.Equal(report.LogRatio.Worst[0], back.LogRatio.Worst[0]);
+    }
+}
