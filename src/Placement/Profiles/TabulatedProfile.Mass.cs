@@ -6,6 +6,7 @@ public sealed partial class TabulatedProfile
 {
     private const double PanelTolerance = 1e-14;
     private const double MaxPanelLogVariation = 2.0;
+    private const int ChebyshevTerms = 16;
     private static readonly double[] GlNodes = GaussLegendreRule.Eight.Nodes.ToArray();
     private static readonly double[] GlWeights = GaussLegendreRule.Eight.Weights.ToArray();
 
@@ -15,6 +16,9 @@ public sealed partial class TabulatedProfile
     private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
     private int[] _pSeg = [];
     private double[] _lnC = [];
+    // Per PCHIP panel: Chebyshev series (ChebyshevTerms coefficients) of the mass from the panel start as a function of
+    // s ∈ [−1, 1] (u = u0 + (s + 1)h/2), and of its derivative (ChebyshevTerms − 1), flattened panel after panel.
+    private double[] _pCheb = [], _pChebD = [];
 
     /// <inheritdoc />
     public double EnclosedMass(double r) => EnclosedMassUnchecked(r, TotalMass);
@@ -75,15 +79,7 @@ public sealed partial class TabulatedProfile
                 u = hi * target / (_pM0[p + 1] - _pM0[p]);
                 break;
             default:
-                {
-                    rBase = c.R0[k];
-                    lo = _pU0[p];
-                    hi = _pU0[p] + _pH[p];
-                    // Cubic Hermite guess of u against mass with the exact end slopes du/dM = 1/(dM/du).
-                    double w = _pM0[p + 1] - _pM0[p];
-                    u = lo + MonotoneCubic.Hermite(target / w, w, 0, _pH[p], Math.Exp(-_pG0[p]), Math.Exp(-_pG1[p]));
-                    break;
-                }
+                return c.R0[k] * Math.Exp(SolveChebyshevPanel(p, target));
         }
         if (hi <= lo) return rBase * Math.Exp(lo);
         for (int iter = 0; iter < 100; iter++)
@@ -102,6 +98,32 @@ public sealed partial class TabulatedProfile
         return rBase * Math.Exp(u);
     }
 
+    /// <summary>u = ln(r/R0) in PCHIP panel p where the panel's mass series equals <paramref name="target"/>.</summary>
+    private double SolveChebyshevPanel(int p, double target)
+    {
+        var coef = _pCheb.AsSpan(p * ChebyshevTerms, ChebyshevTerms);
+        var dcoef = _pChebD.AsSpan(p * (ChebyshevTerms - 1), ChebyshevTerms - 1);
+        double w = _pM0[p + 1] - _pM0[p], h = _pH[p];
+        // Cubic Hermite guess of s against mass with the exact end slopes ds/dM = (2/h)/(dM/du).
+        double s = -1 + MonotoneCubic.Hermite(Math.Clamp(target / w, 0, 1), w, 0, 2, 2 / h * Math.Exp(-_pG0[p]), 2 / h * Math.Exp(-_pG1[p]));
+        double lo = -1, hi = 1;
+        for (int iter = 0; iter < 100; iter++)
+        {
+            if (!(s > lo && s < hi)) s = 0.5 * (lo + hi);
+            double f = ChebyshevSeries.Evaluate(coef, s) - target;
+            if (f == 0) break;
+            if (f < 0) lo = s; else hi = s;
+            double next = s - f / ChebyshevSeries.Evaluate(dcoef, s);
+            bool newton = next > lo && next < hi;
+            if (!newton) next = 0.5 * (lo + hi);
+            double step = Math.Abs(next - s) * 0.5 * h;
+            s = next;
+            // After a Newton step of size Δu the error is about ½|g'|Δu² (g = ln dM/du): Δu ≤ 2e-9 leaves < 1e-16 for |g'| ≤ 50.
+            if ((newton && step <= 2e-9) || (hi - lo) * 0.5 * h <= 1e-15) break;
+        }
+        return _pU0[p] + (s + 1) * 0.5 * h;
+    }
+
     /// <summary>Mass between the start of panel p (of segment k) and r.</summary>
     private double PanelMass(int p, int k, double r)
     {
@@ -109,7 +131,10 @@ public sealed partial class TabulatedProfile
         switch (c.Kind[k])
         {
             case ProfileCurve.LogLog:
-                return LogLogMass(k, _pU0[p], Math.Log(r / c.R0[k]));
+                {
+                    double sc = 2 * (Math.Log(r / c.R0[k]) - _pU0[p]) / _pH[p] - 1;
+                    return ChebyshevSeries.Evaluate(_pCheb.AsSpan(p * ChebyshevTerms, ChebyshevTerms), Math.Clamp(sc, -1, 1));
+                }
             case ProfileCurve.CorePower:
                 {
                     double s = c.D0[k], rr = c.R1[k];
@@ -155,6 +180,7 @@ public sealed partial class TabulatedProfile
         _lnC = new double[c.Count];
         var r0 = new List<double>(); var u0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
         var g0 = new List<double>(); var g1 = new List<double>(); var seg = new List<int>();
+        var cheb = new List<double>(); var chebD = new List<double>();
         double total = 0;
         for (int k = 0; k < c.Count; k++)
         {
@@ -163,32 +189,59 @@ public sealed partial class TabulatedProfile
             if (c.Kind[k] != ProfileCurve.LogLog)
             {
                 r0.Add(c.R0[k]); u0.Add(0); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
+                for (int j = 0; j < ChebyshevTerms; j++) cheb.Add(0);
+                for (int j = 0; j < ChebyshevTerms - 1; j++) chebD.Add(0);
                 total += PanelMass(r0.Count - 1, k, c.R1[k]);
                 continue;
             }
-            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, ref total);
+            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
         }
         m0.Add(total);
+        _pCheb = [.. cheb]; _pChebD = [.. chebD];
         _pR0 = [.. r0]; _pU0 = [.. u0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
     }
 
     private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> u0, List<double> hw,
-        List<double> m0, List<double> g0, List<double> g1, List<int> seg, ref double total)
+        List<double> m0, List<double> g0, List<double> g1, List<int> seg, List<double> cheb, List<double> chebD, ref double total)
     {
         double whole = LogLogMass(k, a, b);
         double mid = 0.5 * (a + b);
         double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
         double ga = LogDmDu(k, a), gb = LogDmDu(k, b);
         bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(gb - ga) <= MaxPanelLogVariation;
-        if (ok || depth == 0)
+        Span<double> coef = stackalloc double[ChebyshevTerms];
+        if (ok || depth == 0) ok = FitPanel(k, a, b, whole, coef) || depth == 0;
+        if (ok)
         {
             r0.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a));
             u0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
-            total += whole;
+            foreach (double v in coef) cheb.Add(v);
+            Span<double> d = stackalloc double[ChebyshevTerms - 1];
+            ChebyshevSeries.Derivative(coef, d);
+            foreach (double v in d) chebD.Add(v);
+            total += ChebyshevSeries.Evaluate(coef, 1);
             return;
         }
-        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
-        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
+        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
+        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
+    }
+
+    /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass between the fit points and at both ends.</summary>
+    private bool FitPanel(int k, double a, double b, double whole, Span<double> coef)
+    {
+        Span<double> s = stackalloc double[ChebyshevTerms];
+        Span<double> f = stackalloc double[ChebyshevTerms];
+        ChebyshevSeries.Nodes(s);
+        double half = 0.5 * (b - a);
+        for (int j = 0; j < ChebyshevTerms; j++) f[j] = LogLogMass(k, a, a + (s[j] + 1) * half);
+        ChebyshevSeries.Fit(f, coef);
+        for (int j = 0; j <= ChebyshevTerms; j++)
+        {
+            double sj = Math.Cos(Math.PI * j / ChebyshevTerms);
+            double exact = LogLogMass(k, a, a + (sj + 1) * half);
+            if (Math.Abs(ChebyshevSeries.Evaluate(coef, sj) - exact) > PanelTolerance * whole) return false;
+        }
+        return true;
     }
 
     private MassConsistency CompareMasses(MassSource source)
