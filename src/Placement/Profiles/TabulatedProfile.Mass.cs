@@ -41,6 +41,25 @@ public sealed partial class TabulatedProfile
         }
     }
 
+    /// <summary>Batch r(M) over arrays, split into chunks run in parallel through <see cref="Parallelism.ParallelLoop"/>; same bits on any thread count.</summary>
+    /// <param name="m">Enclosed masses in [0, M(R)], mass units.</param>
+    /// <param name="r">Output radii, length units; at least as long as <paramref name="m"/>.</param>
+    /// <param name="settings">Parallelism; <see cref="Parallelism.ParallelSettings.Default"/> when null.</param>
+    /// <exception cref="ArgumentNullException">An array is null.</exception>
+    /// <exception cref="ArgumentException"><paramref name="r"/> is shorter than <paramref name="m"/>.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A mass is outside [0, M(R)].</exception>
+    public void RadiusOfEnclosedMass(double[] m, double[] r, Parallelism.ParallelSettings? settings)
+    {
+        ArgumentNullException.ThrowIfNull(m);
+        ArgumentNullException.ThrowIfNull(r);
+        ProfileGuards.SpanLengths(m.Length, r.Length, nameof(r));
+        foreach (double v in m) ProfileGuards.MassInRange(v, TotalMass, nameof(m));
+        Parallelism.ParallelLoop.For(m.Length, settings, (start, end) =>
+        {
+            for (int i = start; i < end; i++) r[i] = RadiusOfMass(m[i]);
+        });
+    }
+
     private double RadiusOfMass(double m)
     {
         if (m <= 0) return 0;
