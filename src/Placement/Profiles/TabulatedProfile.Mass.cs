@@ -12,13 +12,16 @@ public sealed partial class TabulatedProfile
 
     // Mass panels (structure of arrays): start radius; start and width in u = ln(r/R0) local to the owning segment
     // (local so that large radii, e.g. 1e11 cm, keep full relative precision); cumulative mass at the start (one extra
-    // entry: the total); owning density segment; ln(dM/du) at both ends (PCHIP panels only).
-    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
+    // entry: the total); owning density segment.
+    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [];
     private int[] _pSeg = [];
     private double[] _lnC = [];
     // Per PCHIP panel: Chebyshev series (ChebyshevTerms coefficients) of the mass from the panel start as a function of
     // s ∈ [−1, 1] (u = u0 + (s + 1)h/2), and of its derivative (ChebyshevTerms − 1), flattened panel after panel.
     private double[] _pCheb = [], _pChebD = [];
+    // Per PCHIP panel: Chebyshev series of the inverse, s as a function of q = 2ΔM/w − 1 (w = panel mass); the starting
+    // guess of the Newton solve in r(M), accurate enough that one Newton step usually finishes.
+    private double[] _pInv = [];
 
     /// <inheritdoc />
     public double EnclosedMass(double r) => EnclosedMassUnchecked(r, TotalMass);
@@ -123,8 +126,7 @@ public sealed partial class TabulatedProfile
         var coef = _pCheb.AsSpan(p * ChebyshevTerms, ChebyshevTerms);
         var dcoef = _pChebD.AsSpan(p * (ChebyshevTerms - 1), ChebyshevTerms - 1);
         double w = _pM0[p + 1] - _pM0[p], h = _pH[p];
-        // Cubic Hermite guess of s against mass with the exact end slopes ds/dM = (2/h)/(dM/du).
-        double s = -1 + MonotoneCubic.Hermite(Math.Clamp(target / w, 0, 1), w, 0, 2, 2 / h * Math.Exp(-_pG0[p]), 2 / h * Math.Exp(-_pG1[p]));
+        double s = ChebyshevSeries.Evaluate(_pInv.AsSpan(p * ChebyshevTerms, ChebyshevTerms), Math.Clamp(2 * target / w - 1, -1, 1));
         double lo = -1, hi = 1;
         for (int iter = 0; iter < 100; iter++)
         {
@@ -197,56 +199,94 @@ public sealed partial class TabulatedProfile
     {
         var c = _density;
         _lnC = new double[c.Count];
-        var r0 = new List<double>(); var u0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
-        var g0 = new List<double>(); var g1 = new List<double>(); var seg = new List<int>();
-        var cheb = new List<double>(); var chebD = new List<double>();
-        double total = 0;
+        var b = new PanelLists();
         for (int k = 0; k < c.Count; k++)
         {
             // dM/du = 4π S r³ρ with r = R0 e^u: the constant part ln(4π S R0³) is folded into one number.
             _lnC[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Log(4 * Math.PI * c.Scale[k]) + 3 * Math.Log(c.R0[k]) : 0;
             if (c.Kind[k] != ProfileCurve.LogLog)
             {
-                r0.Add(c.R0[k]); u0.Add(0); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
-                for (int j = 0; j < ChebyshevTerms; j++) cheb.Add(0);
-                for (int j = 0; j < ChebyshevTerms - 1; j++) chebD.Add(0);
-                total += PanelMass(r0.Count - 1, k, c.R1[k]);
+                // Closed-form panel: series slots stay zero and are never read.
+                b.Add(c.R0[k], 0, c.Hx[k], k, new double[ChebyshevTerms], new double[ChebyshevTerms - 1], new double[ChebyshevTerms]);
+                b.Total += PanelMassClosedForm(k, c.R1[k]);
                 continue;
             }
-            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
+            AddLogPanels(k, 0, c.Hx[k], 30, b);
         }
-        m0.Add(total);
-        _pCheb = [.. cheb]; _pChebD = [.. chebD];
-        _pR0 = [.. r0]; _pU0 = [.. u0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
+        b.M0.Add(b.Total);
+        _pCheb = [.. b.Cheb]; _pChebD = [.. b.ChebD]; _pInv = [.. b.Inv];
+        _pR0 = [.. b.R0]; _pU0 = [.. b.U0]; _pH = [.. b.H]; _pM0 = [.. b.M0]; _pSeg = [.. b.Seg];
     }
 
-    private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> u0, List<double> hw,
-        List<double> m0, List<double> g0, List<double> g1, List<int> seg, List<double> cheb, List<double> chebD, ref double total)
+    private double PanelMassClosedForm(int k, double r)
+    {
+        // PanelMass reads panel data only for PCHIP segments, so any panel index serves for the closed forms.
+        return PanelMass(0, k, r);
+    }
+
+    private void AddLogPanels(int k, double a, double b, int depth, PanelLists lists)
     {
         double whole = LogLogMass(k, a, b);
         double mid = 0.5 * (a + b);
         double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
-        double ga = LogDmDu(k, a), gb = LogDmDu(k, b);
-        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(gb - ga) <= MaxPanelLogVariation;
-        Span<double> coef = stackalloc double[ChebyshevTerms];
+        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(LogDmDu(k, b) - LogDmDu(k, a)) <= MaxPanelLogVariation;
+        var coef = new double[ChebyshevTerms];
         if (ok || depth == 0) ok = FitPanel(k, a, b, whole, coef) || depth == 0;
         if (ok)
         {
-            r0.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a));
-            u0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
-            foreach (double v in coef) cheb.Add(v);
-            Span<double> d = stackalloc double[ChebyshevTerms - 1];
+            var d = new double[ChebyshevTerms - 1];
             ChebyshevSeries.Derivative(coef, d);
-            foreach (double v in d) chebD.Add(v);
-            total += ChebyshevSeries.Evaluate(coef, 1);
+            var inverse = new double[ChebyshevTerms];
+            FitInverse(coef, d, inverse);
+            lists.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a), a, b - a, k, coef, d, inverse);
+            lists.Total += ChebyshevSeries.Evaluate(coef, 1);
             return;
         }
-        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
-        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, cheb, chebD, ref total);
+        AddLogPanels(k, a, mid, depth - 1, lists);
+        AddLogPanels(k, mid, b, depth - 1, lists);
+    }
+
+    /// <summary>Panel arrays while they are being built.</summary>
+    private sealed class PanelLists
+    {
+        public readonly List<double> R0 = [], U0 = [], H = [], M0 = [], Cheb = [], ChebD = [], Inv = [];
+        public readonly List<int> Seg = [];
+        public double Total;
+
+        public void Add(double r0, double u0, double h, int seg, double[] cheb, double[] chebD, double[] inv)
+        {
+            R0.Add(r0); U0.Add(u0); H.Add(h); M0.Add(Total); Seg.Add(seg);
+            Cheb.AddRange(cheb); ChebD.AddRange(chebD); Inv.AddRange(inv);
+        }
+    }
+
+    /// <summary>Fits s(q), the inverse of the panel's mass series, at Chebyshev nodes in q (solved by bisection-safeguarded Newton).</summary>
+    private static void FitInverse(double[] coef, double[] dcoef, double[] inverse)
+    {
+        Span<double> q = stackalloc double[ChebyshevTerms];
+        Span<double> sv = stackalloc double[ChebyshevTerms];
+        ChebyshevSeries.Nodes(q);
+        double w = ChebyshevSeries.Evaluate(coef, 1) - ChebyshevSeries.Evaluate(coef, -1), m0 = ChebyshevSeries.Evaluate(coef, -1);
+        for (int j = 0; j < ChebyshevTerms; j++)
+        {
+            double target = m0 + 0.5 * (q[j] + 1) * w, lo = -1, hi = 1, s = q[j];
+            for (int it = 0; it < 100; it++)
+            {
+                double f = ChebyshevSeries.Evaluate(coef, s) - target;
+                if (f == 0) break;
+                if (f < 0) lo = s; else hi = s;
+                double next = s - f / ChebyshevSeries.Evaluate(dcoef, s);
+                if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+                if (Math.Abs(next - s) < 1e-15) { s = next; break; }
+                s = next;
+            }
+            sv[j] = s;
+        }
+        ChebyshevSeries.Fit(sv, inverse);
     }
 
     /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass between the fit points and at both ends.</summary>
-    private bool FitPanel(int k, double a, double b, double whole, Span<double> coef)
+    private bool FitPanel(int k, double a, double b, double whole, double[] coef)
     {
         Span<double> s = stackalloc double[ChebyshevTerms];
         Span<double> f = stackalloc double[ChebyshevTerms];

@@ -20,12 +20,19 @@ namespace Placement.Profiles;
 /// <para><b>Steps.</b> A radius repeated on two consecutive rows with different densities is a density step (e.g. a
 /// composition change): interpolation restarts on each side, ρ is right-continuous (the outer value at the step
 /// radius) and M is continuous.</para>
-/// <para><b>Enclosed mass.</b> M at segment ends is precomputed by integrating dM/d ln r = 4πr³ρ: closed forms on
-/// the special segments; on PCHIP segments the 8-point Gauss–Legendre rule on panels bisected until each panel agrees
-/// with its two halves to 1e-14 relative (and dM/d ln r varies by at most e² across a panel). M(r) is then one
-/// panel look-up plus one 8-point rule, accurate to ~1e-14 relative to the interpolated density. r(M) is found by
-/// safeguarded Newton in ln r inside the bracketing panel, converged to |Δ ln r| ≤ 1e-14 (≈ 1e-14 relative in r).
-/// </para>
+/// <para><b>Enclosed mass.</b> dM/du = 4πr³ρ (u = ln r) is integrated once, at construction: closed forms on the
+/// special segments; on PCHIP segments by the 8-point Gauss–Legendre rule on panels bisected until each panel agrees
+/// with its two halves to 1e-14 relative and dM/du varies by at most e² across it. Each such panel then stores a
+/// 16-term Chebyshev series of the mass from its start, accepted only if it matches the quadrature to 1e-14 of the
+/// panel mass at 17 check points (else the panel is split), plus a Chebyshev series of the inverse. M(r) is a panel
+/// look-up, one logarithm and one series evaluation; r(M) starts from the inverse series and finishes with
+/// safeguarded Newton on the mass series, stopping once a Newton step in ln r is below 2e-9 (quadratic convergence
+/// leaves &lt; 1e-16), so r(M) is exact to rounding apart from the conditioning 1e-16 M/(4πr³ρ).
+/// Stated accuracy: M(r) equals the integral of the interpolated density to ~1e-14 relative (tests require 1e-13).
+/// How well the interpolated density represents the true body depends on the rows; measured for analytic bodies
+/// tabulated at 2000 rows of <see cref="ProfileSampling.Radii"/>: Plummer 2e-9, polytrope n = 3 5e-10, Hernquist
+/// 2.5e-7 (next to the innermost row, from the cusp extrapolation); 400 equally spaced rows of an 11-decade Gaussian
+/// envelope: 3e-5 (coarse in ln r near the centre); all relative in M(r).</para>
 /// <para><b>Extra quantities</b> use the same scheme (log–log PCHIP when all values in a zone are positive, PCHIP of
 /// the value against ln r otherwise, linear in r² at the centre, constant below the first row, linear to a zero
 /// value at a zero-density surface).</para>
