@@ -155,6 +155,22 @@ public class TabulatedProfileTests
     }
 
     [Fact]
+    public void MassCoordinateTable_WithDensityStep_ConvertsEachLayer()
+    {
+        // Two uniform layers in mass coordinate: r³ = 3m/(4π·8) inside m = 1, then r³ = r1³ + 3(m − 1)/(4π·1) (exact).
+        double[] m = [0, 0.5, 1, 1, 2, 3];
+        double[] rho = [8, 8, 8, 1, 1, 1];
+        var p = TabulatedProfile.FromMassCoordinate(m, rho, UnitSystem.Cgs);
+        p.CheckValidity();
+        double r1 = Math.Cbrt(3 / (4 * Math.PI * 8));
+        Assert.Equal(r1, p.RowRadii[2], 1e-14);
+        Assert.Equal(r1, p.RowRadii[3], 1e-14);
+        Assert.Equal(Math.Cbrt(r1 * r1 * r1 + 3 * 2 / (4 * Math.PI)), p.OuterRadius, 1e-14);
+        Assert.Equal(8, p.Density(0.99 * r1), 12);
+        Assert.Equal(1, p.Density(1.01 * r1), 12);
+    }
+
+    [Fact]
     public void MassCoordinateTable_OfPolytrope_RecoversRadii()
     {
         // n = 1.5 polytrope written in mass coordinate (rows at equal mass steps, zero density at the surface) and
