@@ -7,6 +7,7 @@ public sealed partial class TabulatedProfile
     private const double PanelTolerance = 1e-14;
     private const double MaxPanelLogVariation = 2.0;
     private const int ChebyshevTerms = 16;
+    private static readonly int[] CheckIndices = [0, 1, 4, 8, 12, 15];
     private static readonly double[] GlNodes = GaussLegendreRule.Eight.Nodes.ToArray();
     private static readonly double[] GlWeights = GaussLegendreRule.Eight.Weights.ToArray();
 
@@ -285,7 +286,7 @@ public sealed partial class TabulatedProfile
         ChebyshevSeries.Fit(sv, inverse);
     }
 
-    /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass between the fit points and at both ends.</summary>
+    /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass at the check points.</summary>
     private bool FitPanel(int k, double a, double b, double whole, double[] coef)
     {
         Span<double> s = stackalloc double[ChebyshevTerms];
@@ -294,7 +295,9 @@ public sealed partial class TabulatedProfile
         double half = 0.5 * (b - a);
         for (int j = 0; j < ChebyshevTerms; j++) f[j] = LogLogMass(k, a, a + (s[j] + 1) * half);
         ChebyshevSeries.Fit(f, coef);
-        for (int j = 0; j <= ChebyshevTerms; j++)
+        // Check points: the panel end and the extrema of T_16 nearest the ends and the middle, where interpolation
+        // error peaks (the series is the Chebyshev interpolant, so its error is largest between the fit nodes).
+        foreach (int j in CheckIndices)
         {
             double sj = Math.Cos(Math.PI * j / ChebyshevTerms);
             double exact = LogLogMass(k, a, a + (sj + 1) * half);

@@ -24,7 +24,7 @@ namespace Placement.Profiles;
 /// special segments; on PCHIP segments by the 8-point Gauss–Legendre rule on panels bisected until each panel agrees
 /// with its two halves to 1e-14 relative and dM/du varies by at most e² across it. Each such panel then stores a
 /// 16-term Chebyshev series of the mass from its start, accepted only if it matches the quadrature to 1e-14 of the
-/// panel mass at 17 check points (else the panel is split), plus a Chebyshev series of the inverse. M(r) is a panel
+/// panel mass at 6 check points between the fit nodes (else the panel is split), plus a Chebyshev series of the inverse. M(r) is a panel
 /// look-up, one logarithm and one series evaluation; r(M) starts from the inverse series and finishes with
 /// safeguarded Newton on the mass series, stopping once a Newton step in ln r is below 2e-9 (quadratic convergence
 /// leaves &lt; 1e-16), so r(M) is exact to rounding apart from the conditioning 1e-16 M/(4πr³ρ).
