@@ -23,6 +23,9 @@ public sealed partial class TabulatedProfile
     // Per PCHIP panel: Chebyshev series of the inverse, s as a function of q = 2ΔM/w − 1 (w = panel mass); the starting
     // guess of the Newton solve in r(M), accurate enough that one Newton step usually finishes.
     private double[] _pInv = [];
+    // Guide table for r(M): entry b is the last panel starting at or below mass b·M/G (G = entries − 1), so a look-up
+    // is one bucket plus a binary search over the few panels inside it.
+    private int[] _massGuide = [];
 
     /// <inheritdoc />
     public double EnclosedMass(double r) => EnclosedMassUnchecked(r, TotalMass);
@@ -68,9 +71,18 @@ public sealed partial class TabulatedProfile
     {
         if (m <= 0) return 0;
         if (m >= TotalMass) return OuterRadius;
-        int p = Array.BinarySearch(_pM0, m);
+        int g = _massGuide.Length - 1;
+        int bucket = Math.Min((int)(m / _pM0[^1] * g), g - 1);
+        int first = _massGuide[bucket], last = Math.Min(_massGuide[bucket + 1] + 1, _pM0.Length - 1);
+        int p = Array.BinarySearch(_pM0, first, last - first + 1, m);
         if (p < 0) p = ~p - 1;
-        if (p >= _pM0.Length - 1) p = _pM0.Length - 2;
+        if (p < 0 || p >= _pM0.Length - 1 || _pM0[p] > m || _pM0[p + 1] < m)
+        {
+            // Rounding put m on the wrong side of a bucket edge: search everything.
+            p = Array.BinarySearch(_pM0, m);
+            if (p < 0) p = ~p - 1;
+            p = Math.Clamp(p, 0, _pM0.Length - 2);
+        }
         if (_pM0[p] == m) return _pR0[p];
         int k = _pSeg[p];
         double target = m - _pM0[p];
@@ -215,6 +227,14 @@ public sealed partial class TabulatedProfile
             AddLogPanels(k, 0, c.Hx[k], 30, b);
         }
         b.M0.Add(b.Total);
+        int entries = 2 * b.R0.Count + 1;
+        _massGuide = new int[entries + 1];
+        for (int e = 0, p = 0; e <= entries; e++)
+        {
+            double edge = b.Total * e / entries;
+            while (p + 1 < b.R0.Count && b.M0[p + 1] <= edge) p++;
+            _massGuide[e] = p;
+        }
         _pCheb = [.. b.Cheb]; _pChebD = [.. b.ChebD]; _pInv = [.. b.Inv];
         _pR0 = [.. b.R0]; _pU0 = [.. b.U0]; _pH = [.. b.H]; _pM0 = [.. b.M0]; _pSeg = [.. b.Seg];
     }
