@@ -1,4 +1,3 @@
-using Placement.Numerics;
 using Placement.Units;
 
 namespace Placement.Profiles;
@@ -57,25 +56,9 @@ public static class DemoBodies
         var shape = new TabulatedProfile(r, rho, UnitSystem.Solar);
         double k = 1.0 / shape.TotalMass;
         for (int i = 0; i < rho.Count; i++) rho[i] *= k;
-        var body = new TabulatedProfile(r, rho, UnitSystem.Solar);
-
-        // Hydrostatic pressure, integrated inward row interval by row interval.
-        double g = UnitSystem.Solar.GravitationalConstant;
-        var p = new double[r.Count];
-        for (int i = r.Count - 2; i >= 0; i--)
-        {
-            double a = r[i], b = r[i + 1];
-            p[i] = p[i + 1] + (b > a
-                ? AdaptiveQuadrature.Integrate(s => g * body.EnclosedMass(s) * body.Density(s) / (s * s), a, b, 1e-12).Value
-                : 0);
-        }
-        var units = UnitSystem.Solar;
-        var quantities = new[]
-        {
-            new TabulatedQuantity(new ProfileQuantity("P", PhysicalUnit.ForSystem(units, -1, 1, -2)), p),
-            new TabulatedQuantity(new ProfileQuantity(HydrogenFraction, PhysicalUnit.One), x),
-        };
-        return new TabulatedProfile(r, rho, units,
-            new TabulatedProfileOptions { Description = "INVENTED two-zone demo star (not a real star)" }, quantities: quantities);
+        var composition = new[] { new TabulatedQuantity(new ProfileQuantity(HydrogenFraction, PhysicalUnit.One), x) };
+        return new TabulatedProfile(r, rho, UnitSystem.Solar,
+            new TabulatedProfileOptions { Description = "INVENTED two-zone demo star (not a real star)" }, quantities: composition)
+            .WithHydrostaticPressure();
     }
 }

@@ -86,39 +86,57 @@ public sealed class LaneEmdenSolution
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="xi"/> is outside [0, MaxXi].</exception>
     public double DensityFactor(double xi) => F(Theta(xi));
 
-    /// <summary>The ξ with μ(ξ) = <paramref name="mu"/>, by safeguarded Newton on the dense output (tolerance 1e-15 ξ).</summary>
+    /// <summary>The ξ with μ(ξ) = <paramref name="mu"/>, by safeguarded Newton on the dense output (tolerance 1e-15 ξ); no allocation.</summary>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="mu"/> is outside [0, μ(MaxXi)].</exception>
     public double XiOfMu(double mu)
     {
         if (!(mu >= 0 && mu <= _mu[^1])) throw new ArgumentOutOfRangeException(nameof(mu), mu, $"μ must lie in [0, {_mu[^1]}].");
         if (mu == 0) return 0;
         if (mu >= _mu[^1]) return MaxXi;
-        double lo, hi, guess;
-        Func<double, (double, double)> f;
-        if (mu <= _mu[0])
+        // Safeguarded Newton without delegates (no allocation per call): on the centre series below the first point,
+        // otherwise on the cubic Hermite of the bracketing interval.
+        bool series = mu <= _mu[0];
+        int k = 0;
+        double lo, hi, x;
+        if (series)
         {
             lo = 0; hi = _xi[0];
-            guess = Math.Cbrt(3 * mu);
-            f = x => (LaneEmden.Series(Index, x).Mu - mu, x * x * F(LaneEmden.Series(Index, x).Theta));
+            x = Math.Cbrt(3 * mu);
         }
         else
         {
-            int k = _mu.AsSpan().BinarySearch(mu);
+            k = _mu.AsSpan().BinarySearch(mu);
             if (k < 0) k = ~k - 1;
             if (k >= _xi.Length - 1) k = _xi.Length - 2;
             if (_mu[k] == mu) return _xi[k];
             lo = _xi[k]; hi = _xi[k + 1];
-            double h = hi - lo;
-            guess = lo + h * (mu - _mu[k]) / (_mu[k + 1] - _mu[k]);
-            int kk = k;
-            f = x =>
-            {
-                double t = (x - _xi[kk]) / h;
-                return (MonotoneCubic.Hermite(t, h, _mu[kk], _mu[kk + 1], _dMu[kk], _dMu[kk + 1]) - mu,
-                        MonotoneCubic.HermiteDerivative(t, h, _mu[kk], _mu[kk + 1], _dMu[kk], _dMu[kk + 1]));
-            };
+            x = lo + (hi - lo) * (mu - _mu[k]) / (_mu[k + 1] - _mu[k]);
         }
-        return SafeguardedNewton.Solve(f, lo, hi, guess, 1e-15 * hi);
+        double h = _xi.Length > 1 ? _xi[k + 1] - _xi[k] : 1, tol = 1e-15 * hi;
+        for (int iter = 0; iter < 200; iter++)
+        {
+            if (!(x > lo && x < hi)) x = 0.5 * (lo + hi);
+            double v, d;
+            if (series)
+            {
+                var (theta, m) = LaneEmden.Series(Index, x);
+                v = m - mu;
+                d = x * x * F(theta);
+            }
+            else
+            {
+                double t = (x - _xi[k]) / h;
+                v = MonotoneCubic.Hermite(t, h, _mu[k], _mu[k + 1], _dMu[k], _dMu[k + 1]) - mu;
+                d = MonotoneCubic.HermiteDerivative(t, h, _mu[k], _mu[k + 1], _dMu[k], _dMu[k + 1]);
+            }
+            if (v == 0) return x;
+            if (v < 0) lo = x; else hi = x;
+            double next = x - v / d;
+            if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+            if (Math.Abs(next - x) <= tol || hi - lo <= tol) return next;
+            x = next;
+        }
+        return x;
     }
 
     private double F(double theta) =>

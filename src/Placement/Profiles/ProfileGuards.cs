@@ -8,9 +8,10 @@ internal static class ProfileGuards
         if (!(value > 0) || !double.IsFinite(value)) throw new ArgumentOutOfRangeException(name, value, $"{what} must be finite and > 0.");
     }
 
+    /// <summary>Accepts 0 ≤ m ≤ total, and masses up to 1e-12 relative above the total (rounding in callers' sums), which mean R.</summary>
     public static void MassInRange(double m, double total, string name)
     {
-        if (!(m >= 0 && m <= total)) throw new ArgumentOutOfRangeException(name, m, $"Enclosed mass must lie in [0, {total}].");
+        if (!(m >= 0 && m <= total * (1 + 1e-12))) throw new ArgumentOutOfRangeException(name, m, $"Enclosed mass must lie in [0, {total}].");
     }
 
     public static void SpanLengths(int input, int output, string name)

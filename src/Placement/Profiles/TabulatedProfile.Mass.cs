@@ -6,15 +6,26 @@ public sealed partial class TabulatedProfile
 {
     private const double PanelTolerance = 1e-14;
     private const double MaxPanelLogVariation = 2.0;
+    private const int ChebyshevTerms = 16;
+    private static readonly int[] CheckIndices = [0, 1, 4, 8, 12, 15];
     private static readonly double[] GlNodes = GaussLegendreRule.Eight.Nodes.ToArray();
     private static readonly double[] GlWeights = GaussLegendreRule.Eight.Weights.ToArray();
 
     // Mass panels (structure of arrays): start radius; start and width in u = ln(r/R0) local to the owning segment
     // (local so that large radii, e.g. 1e11 cm, keep full relative precision); cumulative mass at the start (one extra
-    // entry: the total); owning density segment; ln(dM/du) at both ends (PCHIP panels only).
-    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [], _pG0 = [], _pG1 = [];
+    // entry: the total); owning density segment.
+    private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [];
     private int[] _pSeg = [];
     private double[] _lnC = [];
+    // Per PCHIP panel: Chebyshev series (ChebyshevTerms coefficients) of the mass from the panel start as a function of
+    // s ∈ [−1, 1] (u = u0 + (s + 1)h/2), and of its derivative (ChebyshevTerms − 1), flattened panel after panel.
+    private double[] _pCheb = [], _pChebD = [];
+    // Per PCHIP panel: Chebyshev series of the inverse, s as a function of q = 2ΔM/w − 1 (w = panel mass); the starting
+    // guess of the Newton solve in r(M), accurate enough that one Newton step usually finishes.
+    private double[] _pInv = [];
+    // Guide table for r(M): entry b is the last panel starting at or below mass b·M/G (G = entries − 1), so a look-up
+    // is one bucket plus a binary search over the few panels inside it.
+    private int[] _massGuide = [];
 
     /// <inheritdoc />
     public double EnclosedMass(double r) => EnclosedMassUnchecked(r, TotalMass);
@@ -37,13 +48,41 @@ public sealed partial class TabulatedProfile
         }
     }
 
+    /// <summary>Batch r(M) over arrays, split into chunks run in parallel through <see cref="Parallelism.ParallelLoop"/>; same bits on any thread count.</summary>
+    /// <param name="m">Enclosed masses in [0, M(R)], mass units.</param>
+    /// <param name="r">Output radii, length units; at least as long as <paramref name="m"/>.</param>
+    /// <param name="settings">Parallelism; <see cref="Parallelism.ParallelSettings.Default"/> when null.</param>
+    /// <exception cref="ArgumentNullException">An array is null.</exception>
+    /// <exception cref="ArgumentException"><paramref name="r"/> is shorter than <paramref name="m"/>.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A mass is outside [0, M(R)].</exception>
+    public void RadiusOfEnclosedMass(double[] m, double[] r, Parallelism.ParallelSettings? settings)
+    {
+        ArgumentNullException.ThrowIfNull(m);
+        ArgumentNullException.ThrowIfNull(r);
+        ProfileGuards.SpanLengths(m.Length, r.Length, nameof(r));
+        foreach (double v in m) ProfileGuards.MassInRange(v, TotalMass, nameof(m));
+        Parallelism.ParallelLoop.For(m.Length, settings, (start, end) =>
+        {
+            for (int i = start; i < end; i++) r[i] = RadiusOfMass(m[i]);
+        });
+    }
+
     private double RadiusOfMass(double m)
     {
         if (m <= 0) return 0;
         if (m >= TotalMass) return OuterRadius;
-        int p = Array.BinarySearch(_pM0, m);
+        int g = _massGuide.Length - 1;
+        int bucket = Math.Min((int)(m / _pM0[^1] * g), g - 1);
+        int first = _massGuide[bucket], last = Math.Min(_massGuide[bucket + 1] + 1, _pM0.Length - 1);
+        int p = Array.BinarySearch(_pM0, first, last - first + 1, m);
         if (p < 0) p = ~p - 1;
-        if (p >= _pM0.Length - 1) p = _pM0.Length - 2;
+        if (p < 0 || p >= _pM0.Length - 1 || _pM0[p] > m || _pM0[p + 1] < m)
+        {
+            // Rounding put m on the wrong side of a bucket edge: search everything.
+            p = Array.BinarySearch(_pM0, m);
+            if (p < 0) p = ~p - 1;
+            p = Math.Clamp(p, 0, _pM0.Length - 2);
+        }
         if (_pM0[p] == m) return _pR0[p];
         int k = _pSeg[p];
         double target = m - _pM0[p];
@@ -75,15 +114,7 @@ public sealed partial class TabulatedProfile
                 u = hi * target / (_pM0[p + 1] - _pM0[p]);
                 break;
             default:
-                {
-                    rBase = c.R0[k];
-                    lo = _pU0[p];
-                    hi = _pU0[p] + _pH[p];
-                    // Cubic Hermite guess of u against mass with the exact end slopes du/dM = 1/(dM/du).
-                    double w = _pM0[p + 1] - _pM0[p];
-                    u = lo + MonotoneCubic.Hermite(target / w, w, 0, _pH[p], Math.Exp(-_pG0[p]), Math.Exp(-_pG1[p]));
-                    break;
-                }
+                return c.R0[k] * Math.Exp(SolveChebyshevPanel(p, target));
         }
         if (hi <= lo) return rBase * Math.Exp(lo);
         for (int iter = 0; iter < 100; iter++)
@@ -102,6 +133,31 @@ public sealed partial class TabulatedProfile
         return rBase * Math.Exp(u);
     }
 
+    /// <summary>u = ln(r/R0) in PCHIP panel p where the panel's mass series equals <paramref name="target"/>.</summary>
+    private double SolveChebyshevPanel(int p, double target)
+    {
+        var coef = _pCheb.AsSpan(p * ChebyshevTerms, ChebyshevTerms);
+        var dcoef = _pChebD.AsSpan(p * (ChebyshevTerms - 1), ChebyshevTerms - 1);
+        double w = _pM0[p + 1] - _pM0[p], h = _pH[p];
+        double s = ChebyshevSeries.Evaluate(_pInv.AsSpan(p * ChebyshevTerms, ChebyshevTerms), Math.Clamp(2 * target / w - 1, -1, 1));
+        double lo = -1, hi = 1;
+        for (int iter = 0; iter < 100; iter++)
+        {
+            if (!(s > lo && s < hi)) s = 0.5 * (lo + hi);
+            double f = ChebyshevSeries.Evaluate(coef, s) - target;
+            if (f == 0) break;
+            if (f < 0) lo = s; else hi = s;
+            double next = s - f / ChebyshevSeries.Evaluate(dcoef, s);
+            bool newton = next > lo && next < hi;
+            if (!newton) next = 0.5 * (lo + hi);
+            double step = Math.Abs(next - s) * 0.5 * h;
+            s = next;
+            // After a Newton step of size Δu the error is about ½|g'|Δu² (g = ln dM/du): Δu ≤ 2e-9 leaves < 1e-16 for |g'| ≤ 50.
+            if ((newton && step <= 2e-9) || (hi - lo) * 0.5 * h <= 1e-15) break;
+        }
+        return _pU0[p] + (s + 1) * 0.5 * h;
+    }
+
     /// <summary>Mass between the start of panel p (of segment k) and r.</summary>
     private double PanelMass(int p, int k, double r)
     {
@@ -109,7 +165,10 @@ public sealed partial class TabulatedProfile
         switch (c.Kind[k])
         {
             case ProfileCurve.LogLog:
-                return LogLogMass(k, _pU0[p], Math.Log(r / c.R0[k]));
+                {
+                    double sc = 2 * (Math.Log(r / c.R0[k]) - _pU0[p]) / _pH[p] - 1;
+                    return ChebyshevSeries.Evaluate(_pCheb.AsSpan(p * ChebyshevTerms, ChebyshevTerms), Math.Clamp(sc, -1, 1));
+                }
             case ProfileCurve.CorePower:
                 {
                     double s = c.D0[k], rr = c.R1[k];
@@ -153,42 +212,118 @@ public sealed partial class TabulatedProfile
     {
         var c = _density;
         _lnC = new double[c.Count];
-        var r0 = new List<double>(); var u0 = new List<double>(); var hw = new List<double>(); var m0 = new List<double>();
-        var g0 = new List<double>(); var g1 = new List<double>(); var seg = new List<int>();
-        double total = 0;
+        var b = new PanelLists();
         for (int k = 0; k < c.Count; k++)
         {
             // dM/du = 4π S r³ρ with r = R0 e^u: the constant part ln(4π S R0³) is folded into one number.
             _lnC[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Log(4 * Math.PI * c.Scale[k]) + 3 * Math.Log(c.R0[k]) : 0;
             if (c.Kind[k] != ProfileCurve.LogLog)
             {
-                r0.Add(c.R0[k]); u0.Add(0); hw.Add(c.Hx[k]); m0.Add(total); g0.Add(0); g1.Add(0); seg.Add(k);
-                total += PanelMass(r0.Count - 1, k, c.R1[k]);
+                // Closed-form panel: series slots stay zero and are never read.
+                b.Add(c.R0[k], 0, c.Hx[k], k, new double[ChebyshevTerms], new double[ChebyshevTerms - 1], new double[ChebyshevTerms]);
+                b.Total += PanelMassClosedForm(k, c.R1[k]);
                 continue;
             }
-            AddLogPanels(k, 0, c.Hx[k], 30, r0, u0, hw, m0, g0, g1, seg, ref total);
+            AddLogPanels(k, 0, c.Hx[k], 30, b);
         }
-        m0.Add(total);
-        _pR0 = [.. r0]; _pU0 = [.. u0]; _pH = [.. hw]; _pM0 = [.. m0]; _pG0 = [.. g0]; _pG1 = [.. g1]; _pSeg = [.. seg];
+        b.M0.Add(b.Total);
+        int entries = 2 * b.R0.Count + 1;
+        _massGuide = new int[entries + 1];
+        for (int e = 0, p = 0; e <= entries; e++)
+        {
+            double edge = b.Total * e / entries;
+            while (p + 1 < b.R0.Count && b.M0[p + 1] <= edge) p++;
+            _massGuide[e] = p;
+        }
+        _pCheb = [.. b.Cheb]; _pChebD = [.. b.ChebD]; _pInv = [.. b.Inv];
+        _pR0 = [.. b.R0]; _pU0 = [.. b.U0]; _pH = [.. b.H]; _pM0 = [.. b.M0]; _pSeg = [.. b.Seg];
     }
 
-    private void AddLogPanels(int k, double a, double b, int depth, List<double> r0, List<double> u0, List<double> hw,
-        List<double> m0, List<double> g0, List<double> g1, List<int> seg, ref double total)
+    private double PanelMassClosedForm(int k, double r)
+    {
+        // PanelMass reads panel data only for PCHIP segments, so any panel index serves for the closed forms.
+        return PanelMass(0, k, r);
+    }
+
+    private void AddLogPanels(int k, double a, double b, int depth, PanelLists lists)
     {
         double whole = LogLogMass(k, a, b);
         double mid = 0.5 * (a + b);
         double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
-        double ga = LogDmDu(k, a), gb = LogDmDu(k, b);
-        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(gb - ga) <= MaxPanelLogVariation;
-        if (ok || depth == 0)
+        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(LogDmDu(k, b) - LogDmDu(k, a)) <= MaxPanelLogVariation;
+        var coef = new double[ChebyshevTerms];
+        if (ok || depth == 0) ok = FitPanel(k, a, b, whole, coef) || depth == 0;
+        if (ok)
         {
-            r0.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a));
-            u0.Add(a); hw.Add(b - a); m0.Add(total); g0.Add(ga); g1.Add(gb); seg.Add(k);
-            total += whole;
+            var d = new double[ChebyshevTerms - 1];
+            ChebyshevSeries.Derivative(coef, d);
+            var inverse = new double[ChebyshevTerms];
+            FitInverse(coef, d, inverse);
+            lists.Add(a == 0 ? _density.R0[k] : _density.R0[k] * Math.Exp(a), a, b - a, k, coef, d, inverse);
+            lists.Total += ChebyshevSeries.Evaluate(coef, 1);
             return;
         }
-        AddLogPanels(k, a, mid, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
-        AddLogPanels(k, mid, b, depth - 1, r0, u0, hw, m0, g0, g1, seg, ref total);
+        AddLogPanels(k, a, mid, depth - 1, lists);
+        AddLogPanels(k, mid, b, depth - 1, lists);
+    }
+
+    /// <summary>Panel arrays while they are being built.</summary>
+    private sealed class PanelLists
+    {
+        public readonly List<double> R0 = [], U0 = [], H = [], M0 = [], Cheb = [], ChebD = [], Inv = [];
+        public readonly List<int> Seg = [];
+        public double Total;
+
+        public void Add(double r0, double u0, double h, int seg, double[] cheb, double[] chebD, double[] inv)
+        {
+            R0.Add(r0); U0.Add(u0); H.Add(h); M0.Add(Total); Seg.Add(seg);
+            Cheb.AddRange(cheb); ChebD.AddRange(chebD); Inv.AddRange(inv);
+        }
+    }
+
+    /// <summary>Fits s(q), the inverse of the panel's mass series, at Chebyshev nodes in q (solved by bisection-safeguarded Newton).</summary>
+    private static void FitInverse(double[] coef, double[] dcoef, double[] inverse)
+    {
+        Span<double> q = stackalloc double[ChebyshevTerms];
+        Span<double> sv = stackalloc double[ChebyshevTerms];
+        ChebyshevSeries.Nodes(q);
+        double w = ChebyshevSeries.Evaluate(coef, 1) - ChebyshevSeries.Evaluate(coef, -1), m0 = ChebyshevSeries.Evaluate(coef, -1);
+        for (int j = 0; j < ChebyshevTerms; j++)
+        {
+            double target = m0 + 0.5 * (q[j] + 1) * w, lo = -1, hi = 1, s = q[j];
+            for (int it = 0; it < 100; it++)
+            {
+                double f = ChebyshevSeries.Evaluate(coef, s) - target;
+                if (f == 0) break;
+                if (f < 0) lo = s; else hi = s;
+                double next = s - f / ChebyshevSeries.Evaluate(dcoef, s);
+                if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+                if (Math.Abs(next - s) < 1e-15) { s = next; break; }
+                s = next;
+            }
+            sv[j] = s;
+        }
+        ChebyshevSeries.Fit(sv, inverse);
+    }
+
+    /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass at the check points.</summary>
+    private bool FitPanel(int k, double a, double b, double whole, double[] coef)
+    {
+        Span<double> s = stackalloc double[ChebyshevTerms];
+        Span<double> f = stackalloc double[ChebyshevTerms];
+        ChebyshevSeries.Nodes(s);
+        double half = 0.5 * (b - a);
+        for (int j = 0; j < ChebyshevTerms; j++) f[j] = LogLogMass(k, a, a + (s[j] + 1) * half);
+        ChebyshevSeries.Fit(f, coef);
+        // Check points: the panel end and the extrema of T_16 nearest the ends and the middle, where interpolation
+        // error peaks (the series is the Chebyshev interpolant, so its error is largest between the fit nodes).
+        foreach (int j in CheckIndices)
+        {
+            double sj = Math.Cos(Math.PI * j / ChebyshevTerms);
+            double exact = LogLogMass(k, a, a + (sj + 1) * half);
+            if (Math.Abs(ChebyshevSeries.Evaluate(coef, sj) - exact) > PanelTolerance * whole) return false;
+        }
+        return true;
     }
 
     private MassConsistency CompareMasses(MassSource source)

@@ -78,6 +78,23 @@ public class LaneEmdenTests
         Assert.True(Math.Abs(LaneEmden.Solve(n).CentralToMeanDensity / expected - 1) < 2e-7);
     }
 
+    [Theory]
+    [InlineData(0.5)]
+    [InlineData(1.5)]
+    [InlineData(3.0)]
+    [InlineData(4.5)]
+    public void DenseOutput_MassEqualsIntegralOfDensity(double n)
+    {
+        // μ(ξ) = ∫₀^ξ s²θⁿ ds is the definition of μ; θ and μ are interpolated separately, so integrating our θⁿ by
+        // adaptive quadrature (1e-13) must reproduce our μ. Required 1e-10 relative (the accuracy for analytic bodies).
+        var s = LaneEmden.Solve(n);
+        for (double xi = 0.02; xi < s.FirstZero; xi += 0.0731 * s.FirstZero)
+        {
+            double q = Placement.Numerics.AdaptiveQuadrature.Integrate(x => x * x * s.DensityFactor(x), 0, xi, 1e-13).Value;
+            Assert.True(Math.Abs(q / s.Mu(xi) - 1) < 1e-10, $"n={n} ξ={xi}: quadrature {q:R} vs μ {s.Mu(xi):R}");
+        }
+    }
+
     [Fact]
     public void Solve_RejectsIndexOutOfRange_AndMissingLimitForIndexFive()
     {

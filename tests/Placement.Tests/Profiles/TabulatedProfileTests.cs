@@ -122,6 +122,35 @@ public class TabulatedProfileTests
     }
 
     [Fact]
+    public void TwelveDecadeDropInOneInterval_AndDensityInversion_StayMonotoneAndInvertible()
+    {
+        // Rows with a 1e12 fall between two neighbouring rows and a density inversion (ρ rising outward once): the
+        // interpolant stays within each interval's end values (shape preservation), M increases, and r(M(r)) = r
+        // (1e-13 plus the conditioning 1e-15 M/(4πr³ρ)) on a fine grid. Properties of our own construction.
+        double[] r = [0, 0.1, 0.2, 0.3, 0.35, 0.5, 0.7, 1.0];
+        double[] rho = [50, 40, 30, 3e-11, 2e-11, 5e-11, 1e-11, 1e-12];
+        var p = new TabulatedProfile(r, rho, UnitSystem.Cgs);
+        p.CheckValidity();
+        Assert.True(p.PanelCount > r.Length, "the steep interval must be split into several panels");
+        double previous = 0;
+        for (int i = 1; i <= 2000; i++)
+        {
+            double x = i / 2000.0;
+            int k = Array.FindLastIndex(r, v => v <= x);
+            if (k < r.Length - 1)
+            {
+                double a = Math.Min(rho[k], rho[k + 1]), b = Math.Max(rho[k], rho[k + 1]);
+                Assert.InRange(p.Density(x), a * (1 - 1e-12), b * (1 + 1e-12));
+            }
+            double m = p.EnclosedMass(x);
+            Assert.True(m >= previous, $"M decreases at {x}");
+            previous = m;
+            double cond = 1e-15 * p.TotalMass / (4 * Math.PI * x * x * x * p.Density(x));
+            Assert.True(Math.Abs(p.RadiusOfEnclosedMass(m) / x - 1) < 1e-13 + cond, $"r(M(r)) at {x}");
+        }
+    }
+
+    [Fact]
     public void TabulatedMasses_ConsistencyIsReported_AndTabulatedSourceReproducesThem()
     {
         // Rows from ρ = 1 (exact M = 4πr³/3) with one mass perturbed by +1 %: the report must find 1 % at that row.
@@ -152,6 +181,22 @@ public class TabulatedProfileTests
         for (int i = 0; i < m.Length; i++)
             Assert.Equal(Math.Cbrt(3 * m[i] / (4 * Math.PI * 3)), p.RowRadii[i], 1e-13);
         Assert.Equal(4, p.TotalMass, 1e-13);
+    }
+
+    [Fact]
+    public void MassCoordinateTable_WithDensityStep_ConvertsEachLayer()
+    {
+        // Two uniform layers in mass coordinate: r³ = 3m/(4π·8) inside m = 1, then r³ = r1³ + 3(m − 1)/(4π·1) (exact).
+        double[] m = [0, 0.5, 1, 1, 2, 3];
+        double[] rho = [8, 8, 8, 1, 1, 1];
+        var p = TabulatedProfile.FromMassCoordinate(m, rho, UnitSystem.Cgs);
+        p.CheckValidity();
+        double r1 = Math.Cbrt(3 / (4 * Math.PI * 8));
+        Assert.Equal(r1, p.RowRadii[2], 1e-14);
+        Assert.Equal(r1, p.RowRadii[3], 1e-14);
+        Assert.Equal(Math.Cbrt(r1 * r1 * r1 + 3 * 2 / (4 * Math.PI)), p.OuterRadius, 1e-14);
+        Assert.Equal(8, p.Density(0.99 * r1), 12);
+        Assert.Equal(1, p.Density(1.01 * r1), 12);
     }
 
     [Fact]
