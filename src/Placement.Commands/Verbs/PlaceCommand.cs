@@ -2,7 +2,9 @@ using System.CommandLine;
 using System.Diagnostics;
 using System.Globalization;
 using System.Text.Json;
+using Placement.Commands.Reports;
 using Placement.IO;
+using Placement.Quality;
 using Placement.Samplers;
 
 namespace Placement.Commands.Verbs;
@@ -19,16 +21,16 @@ internal static class PlaceCommand
             Description = "Point file to write; the format follows the extension: .h5/.hdf5 (HDF5), .vtu (VTK XML), .csv.",
             Required = true,
         };
-        var overwrite = OutputArguments.Overwrite();
-        var command = new Command("place", "Place points (SPH particles or mesh generators) for a profile and write them to a point file.");
+        var outputs = new OutputArguments();
+        var command = new Command("place", "Place points (SPH particles or mesh generators) for a profile and write them to a point file; optionally check them (--report, --plots).");
         profile.AddTo(command);
         sampling.AddTo(command);
         command.Options.Add(output);
-        command.Options.Add(overwrite);
+        outputs.AddTo(command);
         command.SetAction(parse =>
         {
             string path = parse.GetValue(output)!;
-            bool replace = parse.GetValue(overwrite);
+            bool replace = parse.GetValue(outputs.Overwrite);
             try
             {
                 PointFiles.FormatOf(path);
@@ -38,6 +40,7 @@ internal static class PlaceCommand
                 throw new CliException(ExitCodes.Usage, ex.Message);
             }
             OutputArguments.CheckWritable(replace, path);
+            outputs.CheckReportOutputs(parse);
             var body = context.Stage("loading profile", _ => profile.Load(parse));
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
@@ -50,6 +53,12 @@ internal static class PlaceCommand
                 PointFiles.Write(new PointTable(result.Points), path, replace);
                 return 0;
             });
+            QualityReport? quality = null;
+            if (outputs.WantsQuality(parse))
+            {
+                quality = QualityRun.Evaluate(context, result.Points, body, !parse.GetValue(outputs.NoBaseline), request.Seed, request.Parallel!);
+                QualityRun.WriteOutputs(context, quality, result.Points, body, parse.GetValue(outputs.Report), parse.GetValue(outputs.Plots), replace);
+            }
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
                 result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray());
@@ -59,6 +68,7 @@ internal static class PlaceCommand
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                     $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
+                if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;
         });

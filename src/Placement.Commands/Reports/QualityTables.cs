@@ -1,0 +1,31 @@
+using System.Globalization;
+using Placement.Quality;
+using Spectre.Console;
+
+namespace Placement.Commands.Reports;
+
+/// <summary>Renders a quality report as a readable terminal table, with the baseline beside it.</summary>
+internal static class QualityTables
+{
+    private static readonly CultureInfo C = CultureInfo.InvariantCulture;
+
+    public static void Write(IAnsiConsole console, QualityReport report, string title)
+    {
+        var b = report.Baseline;
+        var table = new Table().Title(Markup.Escape(title)).AddColumns("measure", "this set", b is null ? "" : "Poisson baseline", "meaning");
+        void Row(string name, Func<QualityReport, double> value, string format, string meaning) =>
+            table.AddRow(name, value(report).ToString(format, C), b is null ? "" : value(b).ToString(format, C), Markup.Escape(meaning));
+        Row("std ln(Vρ/m)", r => r.LogRatio.StandardDeviation, "F4", "cell-volume scatter (0 = every cell holds its mass)");
+        Row("mean ln(Vρ/m)", r => r.LogRatio.Mean, "F4", "bias of cell volumes");
+        Row("p1 / p99 ln(Vρ/m)", r => r.LogRatio.PercentileValues[^1] - r.LogRatio.PercentileValues[0], "F4", "width of the 1-99 % range");
+        Row("radial density rms", r => r.RadialDensity.RmsError, "P2", "Voronoi vs target density, equal-mass bins");
+        Row("radial density max", r => r.RadialDensity.MaxError, "P2", "worst bin");
+        Row("enclosed mass max", r => r.EnclosedMass.MaxRelativeError, "P3", "max |M_points(<r)/M(r) - 1| at bin edges");
+        Row("offset d/R mean", r => r.Regularity.OffsetMean, "F4", "generator-centroid offset over cell radius");
+        Row("face-angle ratio p95", r => r.Regularity.FaceAngleP95, "F3", "95th percentile of max sqrt(A/pi)/h");
+        Row("cells a mesh code corrects", r => r.Regularity.FractionCorrected, "P2",
+            string.Create(C, $"d/R > {report.Regularity.OffsetThreshold:G3} or face ratio > {report.Regularity.FaceAngleThreshold:G3}"));
+        Row("mean faces", r => r.Regularity.MeanFaces, "F2", "Poisson-Voronoi: 15.54");
+        console.Write(table);
+    }
+}
