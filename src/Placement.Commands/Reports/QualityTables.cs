@@ -26,6 +26,12 @@ internal static class QualityTables
         Row("cells a mesh code corrects", r => r.Regularity.FractionCorrected, "P2",
             string.Create(C, $"d/R > {report.Regularity.OffsetThreshold:G3} or face ratio > {report.Regularity.FaceAngleThreshold:G3}"));
         Row("mean faces", r => r.Regularity.MeanFaces, "F2", "Poisson-Voronoi: 15.54");
+        if (report.Sph is { } sph)
+        {
+            Row("SPH ρ bias (body)", r => r.Sph?.BodyBias ?? double.NaN, "P2", $"mean ρ_SPH/ρ - 1, {sph.Kernel}, N_H = {sph.NeighbourNumber:G3}");
+            Row("SPH ρ rms (body)", r => r.Sph?.BodyRmsError ?? double.NaN, "P2", "rms of ρ_SPH/ρ - 1 where the kernel lies inside the body");
+            Row("SPH ρ rms (surface)", r => r.Sph?.SurfaceRmsError ?? double.NaN, "P2", "kernels cut by the surface read low by construction");
+        }
         console.Write(table);
     }
 }

@@ -4,7 +4,6 @@ using System.Globalization;
 using System.Text.Json;
 using Placement.Quality;
 using Placement.Samplers;
-using Placement.Sph;
 using Spectre.Console;
 
 namespace Placement.Commands.Verbs;
@@ -54,14 +53,9 @@ internal static class CompareCommand
                 var clock = Stopwatch.StartNew();
                 var placed = context.Stage($"{name}: placing", _ => PointSampling.Place(sampler, request));
                 double seconds = clock.Elapsed.TotalSeconds;
-                var report = context.Stage($"{name}: tessellating", _ => QualityChecker.Evaluate(placed.Points, body,
-                    options: QualityOptions.Default with { KeepPerPointValues = false }));
-                double sphRms = double.NaN, sphBias = double.NaN;
-                if (nh > 0)
-                {
-                    var sph = context.Stage($"{name}: SPH densities", _ => SphDensity.Compute(placed.Points, SphKernel.WendlandC2, nh, request.Parallel));
-                    (sphBias, sphRms) = SphNoise(placed.Points, body, sph);
-                }
+                var report = context.Stage($"{name}: tessellating and SPH densities", _ => QualityChecker.Evaluate(placed.Points, body,
+                    options: QualityOptions.Default with { KeepPerPointValues = false, SphNeighbourNumber = nh }));
+                double sphRms = report.Sph?.BodyRmsError ?? double.NaN, sphBias = report.Sph?.BodyBias ?? double.NaN;
                 rows.Add(new CompareRow(name, placed.Points.Count, seconds, report.LogRatio.StandardDeviation, report.RadialDensity.RmsError,
                     report.EnclosedMass.MaxRelativeError, report.Regularity.FractionCorrected, sphBias, sphRms));
             }
@@ -78,29 +72,10 @@ internal static class CompareCommand
                     r.RadialDensityRms.ToString("P2", c), r.EnclosedMassMax.ToString("P3", c), r.FractionCorrected.ToString("P1", c),
                     double.IsNaN(r.SphBias) ? "-" : r.SphBias.ToString("+0.00%;-0.00%", c), double.IsNaN(r.SphRms) ? "-" : r.SphRms.ToString("P2", c));
             context.Console.Write(table);
-            context.Output.WriteLine("SPH columns: Wendland C2, points inside 80 % of the radius (the surface layer lacks neighbours by construction).");
+            context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the body (kernels cut by the surface read low by construction; see check --report).");
             return ExitCodes.Ok;
         });
         return command;
-    }
-
-    /// <summary>Mean and rms of ρ_SPH/ρ_target − 1 over points inside 80 % of the outer radius.</summary>
-    internal static (double Bias, double Rms) SphNoise(Points.PointSet points, Profiles.IRadialProfile profile, SphDensityResult sph)
-    {
-        double sum = 0, sum2 = 0;
-        int m = 0;
-        double limit = 0.8 * profile.OuterRadius;
-        for (int i = 0; i < points.Count; i++)
-        {
-            double r = points.Radius(i);
-            double rho = profile.Density(r);
-            if (r > limit || !(rho > 0)) continue;
-            double e = sph.Density[i] / rho - 1;
-            sum += e;
-            sum2 += e * e;
-            m++;
-        }
-        return m == 0 ? (double.NaN, double.NaN) : (sum / m, Math.Sqrt(sum2 / m));
     }
 
     private sealed record CompareRow(string Sampler, int Points, double PlaceSeconds, double LogRatioStd, double RadialDensityRms,

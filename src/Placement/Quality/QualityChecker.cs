@@ -56,7 +56,13 @@ public static class QualityChecker
     private static QualityReport EvaluateOne(PointSet points, IRadialProfile profile, TessellationDomain domain, QualityOptions options)
     {
         int n = points.Count;
-        var cells = VoronoiTessellation.Compute(points, domain, options.Tessellation);
+        // Cell masses ∫ρ dV by quadrature give the target density averaged over exactly the cells in each radial bin.
+        var tessellation = (options.Tessellation ?? TessellationOptions.Default) with
+        {
+            MassProfile = profile,
+            MassQuadratureAngle = options.CellMassQuadratureAngle,
+        };
+        var cells = VoronoiTessellation.Compute(points, domain, tessellation);
         var radius = new double[n];
         for (int i = 0; i < n; i++) radius[i] = points.Radius(i);
         var rho = new double[n];
@@ -80,9 +86,10 @@ public static class QualityChecker
             outside,
             LogStatistics(logRatio, points, radius, cells, options.WorstCells),
             Histogram.Of(logRatio, -options.HistogramRange, options.HistogramRange, options.HistogramBins),
-            RadialDensity(profile, radius, mass, cells.Volume, options.RadialBins),
-            Enclosed(profile, radius, mass, options.RadialBins),
+            RadialDensity(profile, radius, mass, cells, options.RadialBins),
+            Enclosed(profile, radius, mass),
             Regularity(cells, options),
+            options.SphNeighbourNumber > 0 && n > 1 ? SphComparison(points, profile, radius, rho, options) : null,
             options.KeepPerPointValues ? logRatio : null,
             null);
     }
@@ -129,22 +136,22 @@ public static class QualityChecker
         return k;
     }
 
-    private static RadialDensityComparison RadialDensity(IRadialProfile profile, double[] radius, double[] mass, double[] volume, int bins)
+    private static RadialDensityComparison RadialDensity(IRadialProfile profile, double[] radius, double[] mass, VoronoiCells cells, int bins)
     {
         var edges = EqualMassEdges(profile, bins);
-        var sumM = new double[bins]; var sumV = new double[bins]; var count = new int[bins];
+        var sumM = new double[bins]; var sumV = new double[bins]; var sumTarget = new double[bins]; var count = new int[bins];
         for (int i = 0; i < radius.Length; i++)
         {
             int k = BinOf(edges, radius[i]);
             if (k < 0 || k >= bins) continue;
-            sumM[k] += mass[i]; sumV[k] += volume[i]; count[k]++;
+            double v = cells.Volume[i];
+            sumM[k] += mass[i]; sumV[k] += v; sumTarget[k] += cells.Mass![i]; count[k]++;
         }
         var target = new double[bins]; var measured = new double[bins]; var error = new double[bins];
         double rms = 0, max = 0; int used = 0;
         for (int k = 0; k < bins; k++)
         {
-            double shell = 4.0 / 3.0 * Math.PI * (Math.Pow(edges[k + 1], 3) - Math.Pow(edges[k], 3));
-            target[k] = (profile.EnclosedMass(edges[k + 1]) - profile.EnclosedMass(edges[k])) / shell;
+            target[k] = count[k] > 0 ? sumTarget[k] / sumV[k] : double.NaN;
             measured[k] = count[k] > 0 ? sumM[k] / sumV[k] : double.NaN;
             error[k] = measured[k] / target[k] - 1;
             if (!double.IsFinite(error[k])) continue;
@@ -153,24 +160,64 @@ public static class QualityChecker
         return new RadialDensityComparison(edges[..^1], edges[1..], target, measured, error, count, used > 0 ? Math.Sqrt(rms / used) : double.NaN, max);
     }
 
-    private static EnclosedMassComparison Enclosed(IRadialProfile profile, double[] radius, double[] mass, int bins)
+    private static EnclosedMassComparison Enclosed(IRadialProfile profile, double[] radius, double[] mass)
     {
-        var edges = EqualMassEdges(profile, bins);
-        var order = Enumerable.Range(0, radius.Length).OrderBy(i => radius[i]).ToArray();
-        var r = edges[1..];
-        var model = new double[r.Length]; var points = new double[r.Length]; var relative = new double[r.Length];
-        double running = 0, maxTotal = 0, maxRelative = 0;
-        int next = 0;
-        for (int k = 0; k < r.Length; k++)
+        int n = radius.Length;
+        var order = new int[n];
+        for (int i = 0; i < n; i++) order[i] = i;
+        var keys = (double[])radius.Clone();
+        Array.Sort(keys, order);
+        const int samples = 200;
+        int stride = Math.Max(1, n / samples);
+        var r = new List<double>(); var model = new List<double>(); var points = new List<double>(); var relative = new List<double>();
+        double inside = 0, maxTotal = 0, maxRelative = 0, total = profile.TotalMass;
+        for (int a = 0; a < n;)
         {
-            while (next < order.Length && radius[order[next]] <= r[k]) running += mass[order[next++]];
-            model[k] = profile.EnclosedMass(r[k]);
-            points[k] = running;
-            relative[k] = running / model[k] - 1;
-            maxTotal = Math.Max(maxTotal, Math.Abs(running - model[k]) / profile.TotalMass);
-            maxRelative = Math.Max(maxRelative, Math.Abs(relative[k]));
+            // The group [a, b) of points at one radius counts half at that radius.
+            int b = a;
+            double group = 0;
+            while (b < n && keys[b] == keys[a]) group += mass[order[b++]];
+            double rk = keys[a], mk = profile.EnclosedMass(rk), pk = inside + 0.5 * group;
+            double rel = mk > 0 ? pk / mk - 1 : double.NaN;
+            maxTotal = Math.Max(maxTotal, Math.Abs(pk - mk) / total);
+            if (double.IsFinite(rel)) maxRelative = Math.Max(maxRelative, Math.Abs(rel));
+            if (a / stride != b / stride || b == n)
+            {
+                r.Add(rk); model.Add(mk); points.Add(pk); relative.Add(rel);
+            }
+            inside += group;
+            a = b;
         }
-        return new EnclosedMassComparison(r, model, points, relative, maxTotal, maxRelative);
+        return new EnclosedMassComparison([.. r], [.. model], [.. points], [.. relative], maxTotal, maxRelative);
+    }
+
+    private static SphDensityComparison SphComparison(PointSet points, IRadialProfile profile, double[] radius, double[] rho, QualityOptions options)
+    {
+        var sph = Sph.SphDensity.Compute(points, options.SphKernel, options.SphNeighbourNumber);
+        int bins = options.RadialBins;
+        var edges = EqualMassEdges(profile, bins);
+        var sum = new double[bins]; var sum2 = new double[bins]; var count = new int[bins];
+        double bodySum = 0, bodySum2 = 0, surfSum = 0, surfSum2 = 0;
+        int body = 0, surface = 0;
+        double big = profile.OuterRadius;
+        for (int i = 0; i < radius.Length; i++)
+        {
+            if (!(rho[i] > 0)) continue;
+            double e = sph.Density[i] / rho[i] - 1;
+            int k = BinOf(edges, radius[i]);
+            if (k >= 0 && k < bins) { sum[k] += e; sum2[k] += e * e; count[k]++; }
+            if (radius[i] + sph.Support[i] < big) { bodySum += e; bodySum2 += e * e; body++; }
+            else { surfSum += e; surfSum2 += e * e; surface++; }
+        }
+        var bias = new double[bins]; var scatter = new double[bins];
+        for (int k = 0; k < bins; k++)
+        {
+            bias[k] = count[k] > 0 ? sum[k] / count[k] : double.NaN;
+            scatter[k] = count[k] > 0 ? Math.Sqrt(Math.Max(0, sum2[k] / count[k] - bias[k] * bias[k])) : double.NaN;
+        }
+        return new SphDensityComparison(options.SphKernel.Name, options.SphNeighbourNumber, edges[..^1], edges[1..], bias, scatter, count,
+            body, body > 0 ? bodySum / body : double.NaN, body > 0 ? Math.Sqrt(bodySum2 / body) : double.NaN,
+            surface, surface > 0 ? surfSum / surface : double.NaN, surface > 0 ? Math.Sqrt(surfSum2 / surface) : double.NaN);
     }
 
     private static RegularityStatistics Regularity(VoronoiCells cells, QualityOptions options)

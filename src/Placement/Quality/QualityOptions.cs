@@ -30,6 +30,18 @@ public sealed record QualityOptions
     /// <summary>Keep the per-point ln(Vρ/m) values in the report (8 bytes per point; for slice scatter plots). Default true.</summary>
     public bool KeepPerPointValues { get; init; } = true;
 
+    /// <summary>
+    /// Angular size of the quadrature triangles of the cell masses ∫ρ dV behind the radial density comparison (see the
+    /// tessellation's mass quadrature). Default 0.5: a few triangles per face; degree-5 accuracy per triangle.
+    /// </summary>
+    public double CellMassQuadratureAngle { get; init; } = 0.5;
+
+    /// <summary>Neighbour number N_H of the SPH density check; 0 switches the check off. Default 64.</summary>
+    public double SphNeighbourNumber { get; init; } = 64;
+
+    /// <summary>Kernel of the SPH density check. Default Wendland C2 (with the Dehnen–Aly self-contribution correction).</summary>
+    public Sph.SphKernel SphKernel { get; init; } = Sph.SphKernel.WendlandC2;
+
     /// <summary>Tessellation settings; defaults when null.</summary>
     public TessellationOptions? Tessellation { get; init; }
 

@@ -16,6 +16,7 @@ namespace Placement.Quality;
 /// <param name="RadialDensity">Voronoi against target density in equal-mass bins.</param>
 /// <param name="EnclosedMass">Point mass inside r against M(r).</param>
 /// <param name="Regularity">Moving-mesh regularity of the cells.</param>
+/// <param name="Sph">SPH kernel density against the target, or null when switched off.</param>
 /// <param name="PerPointLogRatio">ln(V ρ_target / m) per point (NaN outside the profile), or null when not kept.</param>
 /// <param name="Baseline">The same report for the baseline set, or null.</param>
 public sealed record QualityReport(
@@ -31,5 +32,6 @@ public sealed record QualityReport(
     RadialDensityComparison RadialDensity,
     EnclosedMassComparison EnclosedMass,
     RegularityStatistics Regularity,
+    SphDensityComparison? Sph,
     double[]? PerPointLogRatio,
     QualityReport? Baseline);

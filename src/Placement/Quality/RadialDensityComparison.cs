@@ -2,13 +2,15 @@ namespace Placement.Quality;
 
 /// <summary>Voronoi density against the target in equal-mass radial bins (arrays for plotting).</summary>
 /// <remarks>
-/// Bin k spans [InnerRadius[k], OuterRadius[k]) with equal profile mass. Target[k] = ΔM/ΔV of the shell (exact,
-/// from M(r)); Measured[k] = Σm_i / ΣV_i over the points whose generator lies in the bin; RelativeError[k] =
+/// Bin k spans [InnerRadius[k], OuterRadius[k]) with equal profile mass and holds the cells whose generator lies
+/// in it. Measured[k] = Σm_i / ΣV_i over those cells; Target[k] = Σ ∫_i ρ dV / ΣV_i, the target density averaged
+/// over exactly the same cells (cell masses by the tessellation's quadrature), so the comparison does not
+/// depend on where the bin edges fall between the layers of a shell placement; RelativeError[k] =
 /// Measured/Target − 1. Densities in mass/length³.
 /// </remarks>
 /// <param name="InnerRadius">Inner bin edges, length units.</param>
 /// <param name="OuterRadius">Outer bin edges, length units.</param>
-/// <param name="Target">Shell-mean target density per bin.</param>
+/// <param name="Target">Target density averaged over the bin's cells.</param>
 /// <param name="Measured">Voronoi density per bin (NaN for an empty bin).</param>
 /// <param name="RelativeError">Measured / Target − 1 per bin.</param>
 /// <param name="Points">Points per bin.</param>

@@ -68,10 +68,11 @@ public class QualityCheckerTests
         const int n = 20000;
         var points = SampleProfile(profile, n, 73);
         var report = QualityChecker.Evaluate(points, profile);
-        // Poisson sampling: 1000 points per equal-mass bin, sd of a bin's summed volume ≈ 0.42/√1000 = 1.3 %;
-        // allow 4 % rms and 8 % max (the centre and edge bins are the noisiest).
-        Assert.InRange(report.RadialDensity.RmsError, 0, 0.04);
-        Assert.InRange(report.RadialDensity.MaxError, 0, 0.08);
+        // Radii drawn independently from M(r): a bin's point count (≈ 1000) has Poisson noise 1/√1000 = 3.2 %, and
+        // the bin's cells share the bin's volume, so each bin's Σm/Σ∫ρdV scatters by about that; allow 4.5 % rms
+        // and 11 % max (3.5 sigma over 20 bins).
+        Assert.InRange(report.RadialDensity.RmsError, 0, 0.045);
+        Assert.InRange(report.RadialDensity.MaxError, 0, 0.11);
         // Enclosed mass of radii drawn from M(r): sup deviation ~ 1.36/√N = 0.0096 at 95 % (Kolmogorov); allow 0.02.
         Assert.InRange(report.EnclosedMass.MaxErrorOfTotal, 0, 0.02);
         // ln(Vρ/m) of a Poisson-like set centres near zero with sd ≈ 0.4–0.5.
@@ -91,7 +92,8 @@ public class QualityCheckerTests
         Array.Clear(points.Mass);
         var report = QualityChecker.Evaluate(points, profile);
         Assert.Equal("equal shares of the profile mass", report.MassSource);
-        Assert.Equal(1.0, report.EnclosedMass.PointMass[^1] / profile.TotalMass, 12);
+        // The outermost point counts half at its own radius (symmetric convention of EnclosedMassComparison).
+        Assert.Equal(1.0 - 0.5 / 3000, report.EnclosedMass.PointMass[^1] / profile.TotalMass, 12);
     }
 
     [Fact]

@@ -1,0 +1,35 @@
+namespace Placement.Quality;
+
+/// <summary>SPH kernel density against the target: bias and scatter of ρ_SPH/ρ_target per equal-mass radial bin.</summary>
+/// <remarks>
+/// ρ_SPH from <see cref="Sph.SphDensity.Compute"/> (self-consistent supports for the neighbour number). The "body" summary takes
+/// every point whose kernel support lies inside the profile radius (|x| + H &lt; R); the "surface" summary the rest,
+/// whose kernels are truncated by the surface and therefore read low by construction.
+/// </remarks>
+/// <param name="Kernel">Kernel name, e.g. <c>wendland-c2</c>.</param>
+/// <param name="NeighbourNumber">N_H the supports were solved for.</param>
+/// <param name="InnerRadius">Inner bin edges, length units.</param>
+/// <param name="OuterRadius">Outer bin edges, length units.</param>
+/// <param name="Bias">Mean of ρ_SPH/ρ_target − 1 per bin (NaN for an empty bin).</param>
+/// <param name="Scatter">Standard deviation of ρ_SPH/ρ_target per bin.</param>
+/// <param name="Points">Points per bin.</param>
+/// <param name="BodyPoints">Points whose support lies inside the profile.</param>
+/// <param name="BodyBias">Mean of ρ_SPH/ρ_target − 1 over the body points.</param>
+/// <param name="BodyRmsError">rms of ρ_SPH/ρ_target − 1 over the body points.</param>
+/// <param name="SurfacePoints">Points whose support crosses the surface.</param>
+/// <param name="SurfaceBias">Mean of ρ_SPH/ρ_target − 1 over the surface points.</param>
+/// <param name="SurfaceRmsError">rms of ρ_SPH/ρ_target − 1 over the surface points.</param>
+public sealed record SphDensityComparison(
+    string Kernel,
+    double NeighbourNumber,
+    double[] InnerRadius,
+    double[] OuterRadius,
+    double[] Bias,
+    double[] Scatter,
+    int[] Points,
+    int BodyPoints,
+    double BodyBias,
+    double BodyRmsError,
+    int SurfacePoints,
+    double SurfaceBias,
+    double SurfaceRmsError);
