@@ -35,13 +35,21 @@ public sealed class CliContext
     public bool Json { get; set; }
 
     /// <summary>An ANSI console over <see cref="Output"/> for tables (no colours when not interactive).</summary>
-    public IAnsiConsole Console => _console ??= AnsiConsole.Create(new AnsiConsoleSettings
+    public IAnsiConsole Console => _console ??= CreateConsole();
+
+    private IAnsiConsole CreateConsole()
     {
-        Out = new AnsiConsoleOutput(Output),
-        Ansi = Interactive ? AnsiSupport.Detect : AnsiSupport.No,
-        ColorSystem = Interactive ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
-        Interactive = Interactive ? InteractionSupport.Detect : InteractionSupport.No,
-    });
+        var console = AnsiConsole.Create(new AnsiConsoleSettings
+        {
+            Out = new AnsiConsoleOutput(Output),
+            Ansi = Interactive ? AnsiSupport.Detect : AnsiSupport.No,
+            ColorSystem = Interactive ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
+            Interactive = Interactive ? InteractionSupport.Detect : InteractionSupport.No,
+        });
+        // Redirected output has no width; 80 columns would fold every table, so give files and pipes room.
+        if (!Interactive) console.Profile.Width = 160;
+        return console;
+    }
 
     private IAnsiConsole? _console;
 

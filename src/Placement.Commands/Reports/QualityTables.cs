@@ -20,7 +20,7 @@ internal static class QualityTables
         Row("p1 / p99 ln(Vρ/m)", r => r.LogRatio.PercentileValues[^1] - r.LogRatio.PercentileValues[0], "F4", "width of the 1-99 % range");
         Row("radial density rms", r => r.RadialDensity.RmsError, "P2", "Voronoi vs target density, equal-mass bins");
         Row("radial density max", r => r.RadialDensity.MaxError, "P2", "worst bin");
-        Row("enclosed mass max", r => r.EnclosedMass.MaxRelativeError, "P3", "max |M_points(<r)/M(r) - 1| at bin edges");
+        Row("enclosed mass max", r => r.EnclosedMass.MaxRelativeError, "P3", "max |M_points(<r)/M(r) - 1| at every point radius with >= 100 points inside");
         Row("offset d/R mean", r => r.Regularity.OffsetMean, "F4", "generator-centroid offset over cell radius");
         Row("face-angle ratio p95", r => r.Regularity.FaceAngleP95, "F3", "95th percentile of max sqrt(A/pi)/h");
         Row("cells a mesh code corrects", r => r.Regularity.FractionCorrected, "P2",

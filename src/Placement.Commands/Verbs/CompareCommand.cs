@@ -66,7 +66,7 @@ internal static class CompareCommand
             }
             var c = CultureInfo.InvariantCulture;
             var table = new Table().Title(Markup.Escape($"{names.Count} samplers, N = {parse.GetValue(sampling.Count):N0}, seed {parse.GetValue(sampling.Seed)}"))
-                .AddColumns("sampler", "N", "place [s]", "std ln(Vρ/m)", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms");
+                .AddColumns("sampler", "N", "place (s)", "std ln(Vρ/m)", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms");
             foreach (var r in rows)
                 table.AddRow(r.Sampler, r.Points.ToString("N0", c), r.PlaceSeconds.ToString("F3", c), r.LogRatioStd.ToString("F4", c),
                     r.RadialDensityRms.ToString("P2", c), r.EnclosedMassMax.ToString("P3", c), r.FractionCorrected.ToString("P1", c),
