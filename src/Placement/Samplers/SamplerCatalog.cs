@@ -28,6 +28,7 @@ public sealed class SamplerCatalog
         c.Register(() => new StretchedLatticeSampler());
         c.Register(() => new PoissonSampler());
         c.Register(() => new Glass.GlassSampler());
+        c.Register(() => new Relaxed.RelaxedSampler());
         return c;
     }
 

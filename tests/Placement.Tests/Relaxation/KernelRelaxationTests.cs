@@ -64,3 +64,25 @@ public class KernelRelaxationTests
         Assert.Equal(a.Z, b.Z);
     }
 }
+
+public class RelaxedSamplerTests
+{
+    [Fact]
+    public void RelaxedSampler_PlacesExactlyN_WithExactMass_AndReportsItsHistory()
+    {
+        var body = new Polytrope(3.0, 2.0, 1.5, UnitSystem.Solar);
+        var sampler = SamplerCatalog.CreateDefault().Create("relaxed");
+        var request = new SamplingRequest(body, 2500)
+        {
+            Seed = 4,
+            Parameters = sampler.Describe().Parse(new Dictionary<string, string> { ["iterations"] = "3", ["start"] = "stretched-lattice" }),
+        };
+        var result = PointSampling.Place(sampler, request);
+        result.Points.CheckValidity();
+        Assert.Equal(2.0, result.Points.TotalMass(), 12);
+        var plan = Assert.IsType<Placement.Samplers.Relaxed.RelaxedPlan>(result.Plan);
+        Assert.Equal(3, plan.History.Iterations);
+        Assert.Contains("stretched-lattice", plan.Notes[0]);
+        Assert.Equal("relaxed", result.Points.Provenance.Sampler);
+    }
+}
