@@ -17,10 +17,13 @@ namespace Placement.Spatial;
 /// <para>Memory: 3 × 8 + 4 bytes per point for the sorted copy and the index, plus 4 bytes per cell
 /// (about 2.7 bytes per point at the default 1.5 points per cell), plus 4 bytes per point transiently while
 /// building.</para>
-/// <para>Queries are exact in double precision. A periodic grid returns periodic images: a neighbour is
-/// reported with the shift that brings it nearest to the query through the offsets walked (every image within
-/// the search radius is reported once). Uniform grids suit points whose density varies by up to a few decades
-/// across the box; for much steeper variation queries stay exact but visit more empty or crowded cells.</para>
+/// <para>Queries (exact in double precision): <see cref="FindNearest"/> (k nearest, nearest first) and
+/// <see cref="FindWithinRadius"/> through the incremental <see cref="NeighbourSearch"/>; and
+/// <see cref="CollectInShell"/>, the fast unsorted row scan for hot loops (Voronoi cells, SPH neighbour sums),
+/// into a reusable <see cref="NeighbourBuffer"/>. A periodic grid reports every periodic image within the radius
+/// as its own neighbour, with its offset vector. Uniform grids suit points whose density varies by up to a few
+/// decades across the box; for much steeper variation queries stay exact but visit more empty or crowded
+/// cells (an adaptive index is the next step for such sets).</para>
 /// </remarks>
 public sealed class PointGrid
 {
