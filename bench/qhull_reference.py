@@ -5,7 +5,8 @@ Route: scipy.spatial.Voronoi (Qhull, options "Qbb Qc Qz") then, for every bounde
 scipy.spatial.ConvexHull of the cell's vertices and its face count from the ridges. Also times
 scipy.spatial.Delaunay alone, the fastest Qhull step any such route needs.
 
-Usage (Debian's Python with python3-scipy): /usr/bin/python3 bench/qhull_reference.py 100000 [repeats]
+Usage (Debian's Python with python3-scipy): /usr/bin/python3 bench/qhull_reference.py 100000 [repeats] [delaunay]
+(the optional third argument "delaunay" times only the Delaunay step, e.g. at 1e6 where the full route takes minutes)
 Prints one line per stage: median wall time over the repeats, and cells per second.
 """
 import statistics
@@ -33,7 +34,10 @@ def main():
     repeats = int(sys.argv[2]) if len(sys.argv) > 2 else 1
     pts = np.random.default_rng(2026).random((n, 3))
     print(f"scipy {scipy.__version__}, numpy {np.__version__}, N = {n}, repeats = {repeats}")
-    for name, fn in (("delaunay only", lambda: Delaunay(pts)), ("voronoi + convex hull volumes + faces", lambda: voronoi_route(pts))):
+    stages = [("delaunay only", lambda: Delaunay(pts))]
+    if not (len(sys.argv) > 3 and sys.argv[3] == "delaunay"):
+        stages.append(("voronoi + convex hull volumes + faces", lambda: voronoi_route(pts)))
+    for name, fn in stages:
         times = []
         for _ in range(repeats):
             t = time.perf_counter()

@@ -104,6 +104,7 @@ internal sealed class ConvexCell
     /// Clips by the half-space n·x ≤ d. Returns true when the plane cut the cell (and became a face).
     /// </summary>
     /// <exception cref="InvalidOperationException">Rounding made the clip inconsistent even with a larger tolerance.</exception>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public bool Clip(double nx, double ny, double nz, double d, int neighbour)
     {
         double norm = Math.Sqrt(nx * nx + ny * ny + nz * nz);
@@ -124,6 +125,7 @@ internal sealed class ConvexCell
     }
 
     // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private int Classify(double nx, double ny, double nz, double limit)
     {
         int removed = 0, t = 0, count = _triCount;
@@ -231,6 +233,7 @@ internal sealed class ConvexCell
     // Boundary of the removed patch when every plane index fits a 64-bit mask: for each plane x, the removed
     // triangles (x, q, r) give out-edges x→q and in-edges r→x; the boundary edge leaving x is the out-edge whose
     // target is not also an in-edge source. O(removed triangles).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool BoundaryByMasks(int stamp, ref int boundary, ref int first)
     {
         var outMask = _outMask; var inMask = _inMask;

@@ -1,5 +1,3 @@
-using System.Runtime.ExceptionServices;
-using Placement.Parallelism;
 using Placement.Points;
 using Placement.Spatial;
 
@@ -13,13 +11,18 @@ namespace Placement.Tessellation;
 /// <remarks>
 /// <para>Method: cell clipping with a security radius (Ray, Sokolov, Lefebvre &amp; Lévy 2018, "Meshless Voronoi on
 /// the GPU", ACM TOG 37(6)); see <see cref="ConvexCell"/>. A neighbour at distance D can only cut the cell if
-/// D/2 &lt; max vertex distance, so the search stops at D ≥ 2·max|v|. Neighbours come nearest-first from a
-/// uniform grid (<see cref="PointGrid"/>, about 1.5 points per grid cell) whose sorted order is also the
-/// processing order, so consecutive cells touch the same memory.</para>
-/// <para>Per cell (uniform random points): about 42 planes tested and 16 cutting, ending with 15.5 faces and
-/// 27 vertices. Memory: the result's 53 bytes per cell, the grid's ~31 bytes per point, plus a few KB of
-/// scratch per worker; no per-cell allocation. Exactness: in a box the volumes sum to the box volume to about
-/// 1e-13 relative; a vertex within <see cref="TessellationOptions.ClipTolerance"/> of a plane counts as on it.</para>
+/// D/2 &lt; max vertex distance, so a cell is complete once every point closer than 2·max|v| was used.</para>
+/// <para>Neighbours: a uniform grid (<see cref="PointGrid"/>, about 1.5 points per grid cell) whose sorted order is
+/// also the processing order, so consecutive cells are neighbours in space and touch the same memory. Each cell
+/// gathers one shell of radius equal to the previous cell's security radius by scanning whole grid rows
+/// (<see cref="PointGrid.CollectInShell"/>), orders it near-first in 16 distance buckets (no full sort), clips,
+/// and gathers a further shell only if its own security radius is larger.</para>
+/// <para>Per cell (uniform random points): about 53 points gathered, 42 bisecting planes tested and 16 cutting,
+/// ending with 15.5 faces and 27 vertices. Measured split of the single-thread time on the development machine:
+/// gathering 25 %, clipping 50 %, face rings and measures 20 %. Memory: the result's 53 bytes per cell, the grid's
+/// ~31 bytes per point (+4 transient), a few KB of scratch per worker, no per-cell allocation. Exactness: in a box
+/// the volumes sum to the box volume to about 1e-13 relative; a vertex within
+/// <see cref="TessellationOptions.ClipTolerance"/> of a plane counts as on it.</para>
 /// </remarks>
 public static class VoronoiTessellation
 {
@@ -43,75 +46,6 @@ public static class VoronoiTessellation
     /// <param name="options">Settings; <see cref="TessellationOptions.Default"/> when null.</param>
     /// <returns>The cells, indexed like the generators.</returns>
     /// <exception cref="ArgumentException">Arrays differ in length, a point lies outside the domain, or two points coincide.</exception>
-    public static VoronoiCells Compute(double[] x, double[] y, double[] z, TessellationDomain domain, TessellationOptions? options = null)
-    {
-        ArgumentNullException.ThrowIfNull(x);
-        ArgumentNullException.ThrowIfNull(y);
-        ArgumentNullException.ThrowIfNull(z);
-        ArgumentNullException.ThrowIfNull(domain);
-        options ??= TessellationOptions.Default;
-        int n = x.Length;
-        if (y.Length != n || z.Length != n) throw new ArgumentException($"Coordinate arrays differ in length: {x.Length}, {y.Length}, {z.Length}.", nameof(y));
-        for (int i = 0; i < n; i++)
-        {
-            if (!domain.Contains(x[i], y[i], z[i]))
-                throw new ArgumentException($"Point {i} at ({x[i]}, {y[i]}, {z[i]}) lies outside the domain {domain}.", nameof(x));
-        }
-        var grid = new PointGrid(x, y, z, (domain.MinX, domain.MinY, domain.MinZ), (domain.MaxX, domain.MaxY, domain.MaxZ),
-            domain.Kind == DomainKind.PeriodicBox, options.PointsPerGridCell);
-        var cells = new VoronoiCells(n, domain, options.KeepFaces, options.MassProfile is not null);
-        if (n == 0) return cells;
-
-        var settings = options.Parallel ?? ParallelSettings.Default;
-        int chunk = ParallelLoop.ChunkSize(n, Math.Min(settings.MinimumChunk, 2048));
-        var chunkFaces = options.KeepFaces ? new FaceBuffer[(n + chunk - 1) / chunk] : null;
-        long tested = 0, cut = 0;
-        double spacing = Math.Cbrt(domain.Volume / n);
-        var loopSettings = settings with { MinimumChunk = chunk };
-        try
-        {
-            ParallelLoop.For(n, loopSettings, (start, end) =>
-            {
-                var worker = new CellBuilder(grid, domain, options, cells, spacing);
-                FaceBuffer? faces = chunkFaces is null ? null : new FaceBuffer();
-                for (int s = start; s < end; s++) worker.Build(s, faces);
-                if (chunkFaces is not null) chunkFaces[start / chunk] = faces!;
-                Interlocked.Add(ref tested, worker.PlanesTested);
-                Interlocked.Add(ref cut, worker.PlanesCut);
-            });
-        }
-        catch (AggregateException ae) when (ae.InnerExceptions.Count > 0)
-        {
-            ExceptionDispatchInfo.Capture(ae.InnerExceptions[0]).Throw();
-            throw;
-        }
-        cells.PlanesTested = tested;
-        cells.PlanesCut = cut;
-        if (chunkFaces is not null) AssembleFaces(cells, grid, chunkFaces, chunk);
-        return cells;
-    }
-
-    private static void AssembleFaces(VoronoiCells cells, PointGrid grid, FaceBuffer[] chunkFaces, int chunk)
-    {
-        var start = cells.FaceStart!;
-        for (int i = 0; i < cells.Count; i++) start[i + 1] = start[i] + cells.FaceCount[i];
-        var neighbour = new int[start[cells.Count]];
-        var area = new double[start[cells.Count]];
-        for (int c = 0; c < chunkFaces.Length; c++)
-        {
-            var buffer = chunkFaces[c];
-            int read = 0;
-            int end = Math.Min(cells.Count, (c + 1) * chunk);
-            for (int s = c * chunk; s < end; s++)
-            {
-                int i = grid.SortedIndex[s];
-                int m = cells.FaceCount[i];
-                buffer.Neighbour.AsSpan(read, m).CopyTo(neighbour.AsSpan(start[i], m));
-                buffer.Area.AsSpan(read, m).CopyTo(area.AsSpan(start[i], m));
-                read += m;
-            }
-        }
-        cells.FaceNeighbour = neighbour;
-        cells.FaceArea = area;
-    }
+    public static VoronoiCells Compute(double[] x, double[] y, double[] z, TessellationDomain domain, TessellationOptions? options = null) =>
+        new VoronoiTessellator(domain, options).Compute(x, y, z);
 }
