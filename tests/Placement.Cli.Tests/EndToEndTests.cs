@@ -135,4 +135,18 @@ public sealed class EndToEndTests : IDisposable
         Assert.True(healpix.GetProperty("logRatioStd").GetDouble() < poisson.GetProperty("logRatioStd").GetDouble());
         Assert.True(healpix.GetProperty("sphRms").GetDouble() < poisson.GetProperty("sphRms").GetDouble());
     }
+
+    [Fact]
+    public void MeshMode_GivesEachPointItsCellMass_AndWritesCellVolumes()
+    {
+        string h5 = PathOf("mesh.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", "plummer:mass=2,scale=0.3,radius=1.5", "-n", "3000", "--mode", "mesh", "-o", h5, "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        var table = Placement.IO.PointFiles.Read(h5);
+        var volume = table.Find("cell_volume");
+        Assert.NotNull(volume);
+        // Cell masses are the profile mass of each cell: they sum to M inside the ball to ~1e-6 (tessellation notes).
+        Assert.Equal(2.0, table.Points.TotalMass(), 1e-6);
+        Assert.True(table.Points.Mass.Distinct().Count() > 100, "mesh masses should differ from cell to cell");
+    }
 }

@@ -6,6 +6,7 @@ using Placement.Commands.Reports;
 using Placement.IO;
 using Placement.Quality;
 using Placement.Samplers;
+using Placement.Tessellation;
 
 namespace Placement.Commands.Verbs;
 
@@ -48,9 +49,22 @@ internal static class PlaceCommand
             var result = context.Stage($"placing {request.Count:N0} points with {sampler.Name}", _ => PointSampling.Place(sampler, request));
             double seconds = clock.Elapsed.TotalSeconds;
             result.Points.CheckValidity();
+            var table = new PointTable(result.Points);
+            if (request.Mode == SamplingMode.MeshGenerators)
+            {
+                // Mesh generators: each point's mass becomes the profile mass of its own Voronoi cell (∫ρ dV by quadrature),
+                // so the set starts with the exact mass in every cell; the cell volumes go into the file too.
+                double reach = body.OuterRadius;
+                for (int i = 0; i < result.Points.Count; i++) reach = Math.Max(reach, result.Points.Radius(i));
+                var cells = context.Stage("integrating the profile mass of every Voronoi cell", _ =>
+                    CellMasses.Integrate(result.Points, TessellationDomain.Sphere(0, 0, 0, reach * (1 + 1e-9)), body,
+                        new TessellationOptions { Parallel = request.Parallel }));
+                cells.Mass!.CopyTo(result.Points.Mass, 0);
+                table.Add(PointColumnNames.CellVolume, cells.Volume, QuantityDimension.Volume, "Voronoi cell volume (ball domain of the profile radius)");
+            }
             context.Stage($"writing {path}", _ =>
             {
-                PointFiles.Write(new PointTable(result.Points), path, replace);
+                PointFiles.Write(table, path, replace);
                 return 0;
             });
             QualityReport? quality = null;
