@@ -11,6 +11,9 @@ public sealed record EnclosedMassErrorData(double[] Radius, double[] RelativeErr
     /// <summary>Figure title.</summary>
     public string Title { get; init; } = "Enclosed-mass error";
 
+    /// <summary>Y-axis label (the plotted quantity is always shown in percent).</summary>
+    public string YLabel { get; init; } = "Enclosed-mass error ΔM/M [%]";
+
     /// <summary>Optional tolerance (a pure number, e.g. 0.01) drawn as a shaded ±band; null for none.</summary>
     public double? Tolerance { get; init; }
 

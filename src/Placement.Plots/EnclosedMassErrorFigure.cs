@@ -22,7 +22,7 @@ public static class EnclosedMassErrorFigure
         var (x, y, _) = PlotGuards.FinitePairs(LogAxis.Log10(data.Radius), percent);
         if (x.Length == 0) throw new ArgumentException("Nothing to plot: no radius is positive with a finite error.", nameof(data));
 
-        var plot = FigureStyle.NewPlot(data.Title, UnitLabel.Axis("Radius r", data.Units.LengthUnitName), "Enclosed-mass error ΔM/M [%]");
+        var plot = FigureStyle.NewPlot(data.Title, UnitLabel.Axis("Radius r", data.Units.LengthUnitName), data.YLabel);
         double xMin = x.Min(), xMax = x.Max();
         if (data.Tolerance is { } tol)
         {

@@ -9,7 +9,7 @@ namespace Placement.Commands.Reports;
 internal static class QualityFigures
 {
     /// <summary>The file names written into a plots directory, without extension.</summary>
-    public static readonly string[] Names = ["density-profile", "enclosed-mass-error", "cell-volume-histogram", "slice"];
+    public static readonly string[] Names = ["density-profile", "enclosed-mass-error", "cell-volume-histogram", "slice", "sph-density"];
 
     /// <summary>Writes every figure as <c>name.png</c> and <c>name.svg</c> into <paramref name="directory"/>.</summary>
     public static IReadOnlyList<string> Save(string directory, QualityReport report, PointSet points, IRadialProfile profile, bool overwrite)
@@ -65,6 +65,20 @@ internal static class QualityFigures
             double half = profile.RadiusOfEnclosedMass(0.5 * profile.TotalMass);
             double slab = 1.5 * Math.Cbrt(4.0 / 3.0 * Math.PI * half * half * half / Math.Max(1, points.Count / 2.0));
             Write(Names[3], SliceScatterFigure.Create(new SliceScatterData(points.X, points.Y, points.Z, values, slab, units)));
+        }
+        if (report.Sph is { } sph)
+        {
+            // SPH density bias per equal-mass bin (at the bins' geometric-mean radii), ±1 % drawn as a band.
+            var radii = new double[sph.Bias.Length];
+            for (int k = 0; k < radii.Length; k++)
+                radii[k] = sph.InnerRadius[k] > 0 ? Math.Sqrt(sph.InnerRadius[k] * sph.OuterRadius[k]) : sph.OuterRadius[k] / 3;
+            Write(Names[4], EnclosedMassErrorFigure.Create(new EnclosedMassErrorData(radii, sph.Bias, units)
+            {
+                Title = $"SPH density bias ({sph.Kernel}, N_H = {sph.NeighbourNumber:G3})",
+                YLabel = "⟨ρ_SPH/ρ⟩ − 1 [%]",
+                Label = "mean per equal-mass bin",
+                Tolerance = 0.01,
+            }));
         }
         return written;
     }
