@@ -87,7 +87,7 @@ public sealed class KdTreeSearch
 
     /// <summary>
     /// The k = <c>slots.Length</c> nearest points to (x, y, z) other than <paramref name="exclude"/>, sorted by distance:
-    /// depth-first descent, nearer child first, pruning nodes farther than the current k-th distance (kept in a bounded max-heap, heap-sorted at the end).
+    /// depth-first descent, nearer child first, pruning nodes farther than the current k-th distance (a bounded max-heap).
     /// Faster than <see cref="Next"/> when the number of neighbours is known in advance.
     /// </summary>
     /// <param name="x">Query x, length units.</param>
@@ -125,17 +125,17 @@ public sealed class KdTreeSearch
                     double dx = xs[s] - x, dy = ys[s] - y, dz = zs[s] - z;
                     double d2 = dx * dx + dy * dy + dz * dz;
                     if (d2 >= worst || t.SortedIndex[s] == exclude) continue;
-                    // The k best so far form a max-heap on distance (root = current k-th nearest): O(log k) per insert.
-                    if (found < k)
+                    // Insertion into the ascending list (k is small: tens).
+                    int i = found < k ? found++ : k - 1;
+                    while (i > 0 && distanceSquared[i - 1] > d2)
                     {
-                        HeapUp(distanceSquared, slots, found++, d2, s);
-                        if (found == k) worst = distanceSquared[0];
+                        distanceSquared[i] = distanceSquared[i - 1];
+                        slots[i] = slots[i - 1];
+                        i--;
                     }
-                    else
-                    {
-                        HeapDownFromRoot(distanceSquared, slots, k, d2, s);
-                        worst = distanceSquared[0];
-                    }
+                    distanceSquared[i] = d2;
+                    slots[i] = s;
+                    if (found == k) worst = distanceSquared[k - 1];
                 }
                 continue;
             }
@@ -155,49 +155,7 @@ public sealed class KdTreeSearch
             }
         }
         _count = 0;
-        // Heap sort the max-heap into ascending order.
-        for (int end = found - 1; end > 0; end--)
-        {
-            double d = distanceSquared[end];
-            int sl = slots[end];
-            distanceSquared[end] = distanceSquared[0];
-            slots[end] = slots[0];
-            HeapDownFromRoot(distanceSquared, slots, end, d, sl);
-        }
         return found;
-    }
-
-    /// <summary>Inserts (d2, slot) at position <paramref name="i"/> of a max-heap and sifts it up.</summary>
-    private static void HeapUp(Span<double> key, Span<int> slot, int i, double d2, int s)
-    {
-        while (i > 0)
-        {
-            int parent = (i - 1) >> 1;
-            if (key[parent] >= d2) break;
-            key[i] = key[parent];
-            slot[i] = slot[parent];
-            i = parent;
-        }
-        key[i] = d2;
-        slot[i] = s;
-    }
-
-    /// <summary>Replaces the root of a max-heap of <paramref name="count"/> entries by (d2, slot) and sifts it down.</summary>
-    private static void HeapDownFromRoot(Span<double> key, Span<int> slot, int count, double d2, int s)
-    {
-        int i = 0;
-        while (true)
-        {
-            int child = 2 * i + 1;
-            if (child >= count) break;
-            if (child + 1 < count && key[child + 1] > key[child]) child++;
-            if (key[child] <= d2) break;
-            key[i] = key[child];
-            slot[i] = slot[child];
-            i = child;
-        }
-        key[i] = d2;
-        slot[i] = s;
     }
 
     private void EnsureCapacity(int n)
