@@ -134,4 +134,21 @@ public class SphDensityTests
         Assert.Equal(one.Density, two.Density);
         Assert.Equal(one.Support, two.Support);
     }
+
+    [Fact]
+    public void GridAndTreeNeighbourSearches_GiveTheSameDensities()
+    {
+        // Both indexes are exact, so supports and densities agree to rounding (sums taken in a different order).
+        var set = new PointSet(4000, UnitSystem.Dimensionless);
+        var rng = new KeyedRandom(21, 0);
+        for (int i = 0; i < set.Count; i++) { set.X[i] = rng.NextDouble(); set.Y[i] = 2 * rng.NextDouble(); set.Z[i] = rng.NextGaussian(); set.Mass[i] = 1 + rng.NextDouble(); }
+        var grid = SphDensity.ComputeWith(set, SphKernel.CubicSpline, 50, SphDensity.IndexChoice.Grid);
+        var tree = SphDensity.ComputeWith(set, SphKernel.CubicSpline, 50, SphDensity.IndexChoice.Tree);
+        for (int i = 0; i < set.Count; i++)
+        {
+            Assert.Equal(tree.Support[i], grid.Support[i], 1e-9 * tree.Support[i]);
+            Assert.Equal(tree.Density[i], grid.Density[i], 1e-9 * tree.Density[i]);
+            Assert.Equal(tree.NeighbourCount[i], grid.NeighbourCount[i]);
+        }
+    }
 }
