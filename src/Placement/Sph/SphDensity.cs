@@ -223,19 +223,7 @@ public static class SphDensity
         double target = neighbourNumber / (4.0 * Math.PI / 3.0 * kernel.Normalisation) - kernel.Shape(0);
         var (atReach, _) = SumAndSlope(kernel, d2, reach, sorted: false);
         if (atReach < target) return double.NaN;
-        double lo = 0, hi = reach;
-        double h = guess > 0 && guess < reach ? guess : 0.5 * reach;
-        for (int iteration = 0; iteration < 200; iteration++)
-        {
-            var (sum, slope) = SumAndSlope(kernel, d2, h, sorted: false);
-            double f = sum - target;
-            if (f > 0) hi = h; else lo = h;
-            double next = slope > 0 ? h - f / slope : 0.5 * (lo + hi);
-            if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-            if (Math.Abs(next - h) <= 1e-10 * h || hi - lo <= 1e-12 * hi) return next;
-            h = next;
-        }
-        return h;
+        return Newton(kernel, d2, target, 0, reach, guess > 0 && guess < reach ? guess : 0.5 * reach, sorted: false);
     }
 
     /// <summary>Solves (4π/3) C Σ_j w(r_j/H) = N_H for H over ascending squared distances (self at distance 0 included).</summary>
@@ -252,14 +240,21 @@ public static class SphDensity
             hi *= 1.5;
             if (hi > 1e6 * Math.Sqrt(d2[m - 1]) + 1e-300) return hi; // all points fetched already: the caller widens k
         }
-        double h = 0.5 * (lo + hi);
+        return Newton(kernel, d2, target, lo, hi, 0.5 * (lo + hi), sorted: true);
+    }
+
+    /// <summary>
+    /// Newton steps on f(H) = Σ_j w(r_j/H) − target from <paramref name="h"/>, kept inside the bracket [lo, hi] where f
+    /// changes sign (the sum is piecewise smooth in H: its slope jumps when a neighbour enters the support); relative
+    /// tolerance 1e-10 in H.
+    /// </summary>
+    private static double Newton(SphKernel kernel, ReadOnlySpan<double> d2, double target, double lo, double hi, double h, bool sorted)
+    {
         for (int iteration = 0; iteration < 200; iteration++)
         {
-            var (sum, slope) = SumAndSlope(kernel, d2, h, sorted: true);
+            var (sum, slope) = SumAndSlope(kernel, d2, h, sorted);
             double f = sum - target;
             if (f > 0) hi = h; else lo = h;
-            // Newton step, kept inside the bracket (the sum is piecewise smooth in H: it jumps in slope when a
-            // neighbour enters the support).
             double next = slope > 0 ? h - f / slope : 0.5 * (lo + hi);
             if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
             if (Math.Abs(next - h) <= 1e-10 * h || hi - lo <= 1e-12 * hi) return next;
