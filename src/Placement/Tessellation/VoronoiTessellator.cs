@@ -50,6 +50,14 @@ public sealed class VoronoiTessellator
         var domain = _domain;
         var options = _options;
         int n = x.Length;
+        if (domain.Kind == DomainKind.Sphere)
+        {
+            // Few points make huge surface cells: holding them to the default δ would take tens of thousands of tangent
+            // planes per cell. Surface cells span about 1.6 N^(-1/3) rad, so δ ≥ 1.4e-3 N^(-2/3) keeps it near 15
+            // planes per direction; from N ≈ 1000 up the configured δ governs.
+            double floor = 1.4e-3 * Math.Pow(Math.Max(n, 1), -2.0 / 3.0);
+            if (options.SphereTolerance < floor) options = options with { SphereTolerance = floor };
+        }
         if (y.Length != n || z.Length != n) throw new ArgumentException($"Coordinate arrays differ in length: {x.Length}, {y.Length}, {z.Length}.", nameof(y));
         for (int i = 0; i < n; i++)
         {
