@@ -57,4 +57,69 @@ public static class RadialRankStretch
             }
         }
     }
+
+    /// <summary>
+    /// A smooth form of the rank stretch: one monotone piecewise-linear map r → r′ through knots every
+    /// <paramref name="pointsPerKnot"/> points in radius order, each knot going to the radius that encloses its rank's
+    /// share of the mass; every point moves by the same map, so points at one radius (a shell) stay at one radius and
+    /// local structure survives, while the enclosed mass is exact at every knot.
+    /// </summary>
+    /// <param name="profile">Target profile.</param>
+    /// <param name="x">x coordinates, moved in place (length units).</param>
+    /// <param name="y">y coordinates.</param>
+    /// <param name="z">z coordinates.</param>
+    /// <param name="pointsPerKnot">Points between knots, ≥ 1 (1 is the exact rank stretch up to ties).</param>
+    /// <exception cref="ArgumentException">Spans differ in length.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="pointsPerKnot"/> &lt; 1.</exception>
+    public static void ApplySmooth(IRadialProfile profile, Span<double> x, Span<double> y, Span<double> z, int pointsPerKnot)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        if (x.Length != y.Length || x.Length != z.Length) throw new ArgumentException("x, y and z must have the same length.", nameof(x));
+        ArgumentOutOfRangeException.ThrowIfLessThan(pointsPerKnot, 1);
+        int n = x.Length;
+        if (n == 0) return;
+        var r = new double[n];
+        for (int i = 0; i < n; i++) r[i] = Math.Sqrt(x[i] * x[i] + y[i] * y[i] + z[i] * z[i]);
+        var sorted = (double[])r.Clone();
+        Array.Sort(sorted);
+        // Knots: (the radius below which k points lie, the radius enclosing k/N of the mass), k = 0, K, 2K, …, N; a knot
+        // whose radius equals the previous one (points tied on a shell) is merged into it.
+        var from = new List<double> { 0.0 };
+        var to = new List<double> { 0.0 };
+        double total = profile.TotalMass;
+        for (int k = pointsPerKnot; ; k += pointsPerKnot)
+        {
+            if (k >= n) k = n;
+            // The knot sits midway between the k-th and (k+1)-th radii, so a shell is not split by it.
+            double knot = k == n ? sorted[n - 1] : 0.5 * (sorted[k - 1] + sorted[k]);
+            if (knot > from[^1])
+            {
+                from.Add(knot);
+                to.Add(profile.RadiusOfEnclosedMass(total * ((double)k / n)));
+            }
+            if (k == n) break;
+        }
+        for (int i = 0; i < n; i++)
+        {
+            double ri = r[i];
+            int j = from.BinarySearch(ri);
+            double target;
+            if (j >= 0) target = to[j];
+            else
+            {
+                j = ~j;
+                if (j >= from.Count) target = to[^1] * (ri / from[^1]);
+                else
+                {
+                    double t = (ri - from[j - 1]) / (from[j] - from[j - 1]);
+                    target = to[j - 1] + t * (to[j] - to[j - 1]);
+                }
+            }
+            if (ri > 0)
+            {
+                double s = target / ri;
+                x[i] *= s; y[i] *= s; z[i] *= s;
+            }
+        }
+    }
 }
