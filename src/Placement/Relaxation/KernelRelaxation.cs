@@ -14,17 +14,15 @@ namespace Placement.Relaxation;
 /// <remarks>
 /// <para>Each point i gets a target support H_i = (3 N_H m_i / (4π ρ_t(r_i)))^(1/3), so a set that follows the target
 /// density has about N_H neighbours inside it (the h ∝ (m/ρ)^(1/3) resolution of Diehl et al. 2015, PASA 32, e048).
-/// With the kernel number density n_i = Σ_j W(r_ij, H_i) and the target n_t = ρ_t/m_i, each point steps down the
-/// gradient of n/n_t: δx_i = −β H_i² V_i (∇n − n ∇ln ρ_t), V_i = m_i/ρ_t (clipped to a fraction of the local
-/// spacing), which pushes points out of over-dense spots into under-dense ones while the ∇ln ρ_t term keeps the
-/// target's own gradient from driving them. This is the particle-shifting idea of moving particles down a
-/// concentration gradient (Lind et al. 2012, J. Comput. Phys. 231, 1499), written against a non-uniform target.</para>
-/// <para>Outer surface: a point whose support reaches past R would see no neighbours outside and be pushed outward,
-/// so every such point gets a fixed mirror ghost at radius 2R − r on its own direction (common practice for kernel
-/// boundaries). After every step the smooth rank stretch (<see cref="RadialRankStretch.ApplySmooth"/>) maps radii
-/// monotonically so that every <see cref="RelaxationSettings.PointsPerRadialKnot"/>-th point encloses exactly its share
-/// of the mass; points that share a radius keep sharing it (an exact per-point rank stretch smeared a shell start over
-/// the shell's thickness and doubled the SPH noise of a steep body in a test). Points never leave [0, R].</para>
+/// With target volumes V_j = m_j / ρ_t(r_j) the kernel sum S_i = Σ_j V_j W(r_ij, H_i) is ≈ 1 wherever the point
+/// density matches the target; each point steps down its gradient, δx_i = −β H_i² ∇S_i (clipped to a fraction of the
+/// local spacing), which pushes points out of over-dense spots into under-dense ones. This is the particle-shifting
+/// idea of moving particles down a concentration gradient (Lind et al. 2012, J. Comput. Phys. 231, 1499), written
+/// with the target volumes so that the equilibrium follows a non-uniform ρ_t.</para>
+/// <para>Outer surface: a point near the surface has no neighbours outside and is pushed outward; after every step
+/// <see cref="RadialRankStretch"/> moves every point back along its direction to the radius enclosing (k + ½)/N of the
+/// mass, so the radial profile (and the enclosed mass, to half a point) stays exact while the repulsion only reorders
+/// points tangentially and locally. Points never leave [0, R].</para>
 /// <para>All points move at once from the same state (Jacobi steps), computed in fixed chunks over a k-d tree, so
 /// the result is identical for any thread count. Cost per iteration: one tree build and one neighbour query per point.</para>
 /// </remarks>
@@ -108,31 +106,21 @@ public static class KernelRelaxation
                 {
                     double h = support[i], inv = 1.0 / h;
                     double norm = kernel.Normalisation * inv * inv * inv;
-                    // Number-density form: n_i = Σ_j W(r_ij, H_i) (self and ghosts included) against the target
-                    // n_t = ρ_t/m_i; the step follows −∇(n/n_t) = −V_i (∇n − n ∇ln ρ_t), whose terms stay bounded where
-                    // neighbours' volumes differ by orders of magnitude (steep envelopes).
-                    double sum = norm * kernel.Shape(0), gx = 0, gy = 0, gz = 0;
+                    double sum = volume[i] * norm * kernel.Shape(0), gx = 0, gy = 0, gz = 0;
                     search.Start(points.X[i], points.Y[i], points.Z[i], i);
                     while (search.Next(h * h, out var hit))
                     {
+                        int j = tree.SortedIndex[hit.Slot];
                         double r = Math.Sqrt(hit.DistanceSquared);
                         double q = r * inv;
-                        sum += norm * kernel.Shape(q);
+                        sum += allVolume[j] * norm * kernel.Shape(q);
                         if (r > 0)
                         {
                             // ∇_i W(|x_i − x_j|) = (C/H⁴) w'(q) (x_i − x_j)/r; hit.D* = x_j − x_i.
-                            double f = -norm * inv * kernel.ShapeDerivative(q) / r;
+                            double f = -allVolume[j] * norm * inv * kernel.ShapeDerivative(q) / r;
                             gx += f * hit.Dx; gy += f * hit.Dy; gz += f * hit.Dz;
                         }
                     }
-                    double ri = points.Radius(i);
-                    if (ri > 0)
-                    {
-                        double slope = LogDensitySlope(profile, ri, 0.5 * h) * sum / ri;
-                        gx -= slope * points.X[i]; gy -= slope * points.Y[i]; gz -= slope * points.Z[i];
-                    }
-                    gx *= volume[i]; gy *= volume[i]; gz *= volume[i];
-                    sum *= volume[i];
                     lnS[i] = Math.Log(sum);
                     double sx = -beta * h * h * gx, sy = -beta * h * h * gy, sz = -beta * h * h * gz;
                     double spacing = Math.Cbrt(volume[i]);
@@ -153,7 +141,7 @@ public static class KernelRelaxation
                 points.Y[i] += dy[i];
                 points.Z[i] += dz[i];
             }
-            if (settings.KeepRadialMassExact) RadialRankStretch.ApplySmooth(profile, points.X, points.Y, points.Z, settings.PointsPerRadialKnot);
+            if (settings.KeepRadialMassExact) RadialRankStretch.Apply(profile, points.X, points.Y, points.Z);
             double rms = Math.Sqrt(sumStep / n);
             steps.Add(rms);
             scatter.Add(Math.Sqrt(var / n));
@@ -166,17 +154,6 @@ public static class KernelRelaxation
             for (int i = s; i < e; i++) points.TargetDensity[i] = profile.Density(points.Radius(i));
         });
         return new RelaxationHistory([.. steps], [.. scatter], [.. seconds], converged);
-    }
-
-    /// <summary>d ln ρ / dr averaged over [r − w, r + w] (clipped to the body), from the profile; 0 where ρ vanishes.</summary>
-    private static double LogDensitySlope(IRadialProfile profile, double r, double w)
-    {
-        double big = profile.OuterRadius * (1 - 1e-9);
-        double a = Math.Max(0, r - w), b = Math.Min(big, r + w);
-        if (!(b > a)) return 0;
-        double ra = profile.Density(a), rb = profile.Density(b);
-        if (!(ra > 0) || !(rb > 0)) return 0;
-        return (Math.Log(rb) - Math.Log(ra)) / (b - a);
     }
 
     private static void EnsureLength(ref double[] array, int length)

@@ -23,9 +23,6 @@ public sealed record RelaxationSettings
     /// <summary>Largest step of one point in one iteration, in units of its local target spacing (default 0.1).</summary>
     public double MaxStepInSpacings { get; init; } = 0.1;
 
-    /// <summary>Re-apply the smooth radial rank stretch after every step, so the enclosed mass stays exact at its knots (default true).</summary>
+    /// <summary>Re-apply the radial rank stretch after every step, so the enclosed mass stays exact (default true).</summary>
     public bool KeepRadialMassExact { get; init; } = true;
-
-    /// <summary>Points between the knots of the smooth radial rank stretch (default 64: enclosed mass exact every 64 points).</summary>
-    public int PointsPerRadialKnot { get; init; } = 64;
 }
