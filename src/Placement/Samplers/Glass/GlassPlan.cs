@@ -1,24 +1,10 @@
 namespace Placement.Samplers.Glass;
 
-/// <summary>The plan of a <see cref="GlassSampler"/>: the final positions, computed once, handed out per batch.</summary>
-/// <remarks>The selection of the N points nearest the centre and the rank stretch are global operations, so the
-/// plan holds the positions (24 bytes per point) and <see cref="GlassSampler.Fill"/> copies each batch.</remarks>
-public sealed class GlassPlan : SamplingPlan
+/// <summary>The plan of a <see cref="GlassSampler"/>: the final positions, selected and stretched once, handed out per batch.</summary>
+public sealed class GlassPlan : PrecomputedPlan
 {
-    internal GlassPlan(int count, IReadOnlyList<PlannedBatch> batches, double[] x, double[] y, double[] z, int tilePoints)
-        : base(count, batches)
-    {
-        X = x;
-        Y = y;
-        Z = z;
-        TilePoints = tilePoints;
-    }
-
-    internal double[] X { get; }
-
-    internal double[] Y { get; }
-
-    internal double[] Z { get; }
+    internal GlassPlan(double[] x, double[] y, double[] z, double massPerPoint, int tilePoints)
+        : base(x, y, z, massPerPoint) => TilePoints = tilePoints;
 
     /// <summary>Points in the glass tile that was repeated.</summary>
     public int TilePoints { get; }

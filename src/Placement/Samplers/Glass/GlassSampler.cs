@@ -31,7 +31,6 @@ public sealed class GlassSampler : IPointSampler
     /// <summary>Parameter: cache file of the tile.</summary>
     public const string TileFileParameter = "tile-file";
 
-    private const int BatchSize = 65_536;
     private const ulong OrientationKey = 0x676C617373526F74UL;
     private const ulong OffsetKey = 0x676C6173734F6666UL;
 
@@ -87,10 +86,7 @@ public sealed class GlassSampler : IPointSampler
         }
         RadialRankStretch.Apply(request.Profile, x, y, z);
 
-        double mass = request.Profile.TotalMass / n;
-        var batches = new List<PlannedBatch>();
-        for (int s = 0; s < n; s += BatchSize) batches.Add(new PlannedBatch(s, Math.Min(BatchSize, n - s), -1, mass, double.NaN));
-        var plan = new GlassPlan(n, batches, x, y, z, tile.Count);
+        var plan = new GlassPlan(x, y, z, request.Profile.TotalMass / n, tile.Count);
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
             $"{n} points from a {tile.Count}-point glass tile ({tile.Iterations} relaxation steps, last rms step {tile.FinalRmsStep:G2} of the spacing), rank-stretched onto the profile."));
         return plan;
@@ -101,10 +97,7 @@ public sealed class GlassSampler : IPointSampler
     public void Fill(SamplingRequest request, SamplingPlan plan, int batch, PointSpans output)
     {
         if (plan is not GlassPlan gp) throw new ArgumentException("Expected the plan made by this sampler's Plan.", nameof(plan));
-        var b = gp.Batches[batch];
-        gp.X.AsSpan(b.Start, b.Count).CopyTo(output.X);
-        gp.Y.AsSpan(b.Start, b.Count).CopyTo(output.Y);
-        gp.Z.AsSpan(b.Start, b.Count).CopyTo(output.Z);
+        gp.CopyBatch(batch, output);
     }
 
     private static GlassTile LoadOrMake(string cache, int tilePoints, int iterations, SamplingRequest request)

@@ -23,8 +23,6 @@ public sealed class RelaxedSampler : IPointSampler
     /// <summary>Parameter: neighbour number of the repulsion kernel.</summary>
     public const string NeighboursParameter = "neighbours";
 
-    private const int BatchSize = 65_536;
-
     /// <inheritdoc />
     public string Name => "relaxed";
 
@@ -56,11 +54,7 @@ public sealed class RelaxedSampler : IPointSampler
             MaxIterations = values.GetInt32(IterationsParameter),
             NeighbourNumber = values.GetDouble(NeighboursParameter),
         }, request.Parallel);
-        int n = placed.Count;
-        double mass = request.Profile.TotalMass / n;
-        var batches = new List<PlannedBatch>();
-        for (int s = 0; s < n; s += BatchSize) batches.Add(new PlannedBatch(s, Math.Min(BatchSize, n - s), -1, mass, double.NaN));
-        var plan = new RelaxedPlan(n, batches, placed.X, placed.Y, placed.Z, history);
+        var plan = new RelaxedPlan(placed.X, placed.Y, placed.Z, request.Profile.TotalMass / placed.Count, history);
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
             $"{start.Name} start relaxed for {history.Iterations} iterations (last rms step {(history.Iterations > 0 ? history.RmsStep[^1] : 0):G3} of the local spacing, kernel-sum scatter {(history.Iterations > 0 ? history.KernelSumScatter[^1] : double.NaN):G3}); {(history.Converged ? "converged" : "iteration limit reached")}."));
         return plan;
@@ -71,9 +65,6 @@ public sealed class RelaxedSampler : IPointSampler
     public void Fill(SamplingRequest request, SamplingPlan plan, int batch, PointSpans output)
     {
         if (plan is not RelaxedPlan rp) throw new ArgumentException("Expected the plan made by this sampler's Plan.", nameof(plan));
-        var b = rp.Batches[batch];
-        rp.X.AsSpan(b.Start, b.Count).CopyTo(output.X);
-        rp.Y.AsSpan(b.Start, b.Count).CopyTo(output.Y);
-        rp.Z.AsSpan(b.Start, b.Count).CopyTo(output.Z);
+        rp.CopyBatch(batch, output);
     }
 }
