@@ -8,8 +8,9 @@ using Placement.Units;
 namespace Placement.Benchmarks;
 
 /// <summary>
-/// Self-consistent SPH densities (Wendland C2, N_H = 64) for uniform random points, against the k-nearest-neighbour
-/// search alone (the floor the density solve sits on). Target (issue 6): 1e6 points in at most 3 s on 2 cores.
+/// Self-consistent SPH densities (Wendland C2, N_H = 64) for uniform random points (grid path, two threads), against the
+/// k-d tree's 64-nearest query on one thread (the path concentrated sets take). Target (issue 6): 1e6 points in at most
+/// 3 s on 2 cores; measured median 2.67 s here, 0.28 of the tree query.
 /// </summary>
 [MemoryDiagnoser]
 public class SphDensityBenchmarks
