@@ -149,4 +149,25 @@ public sealed class EndToEndTests : IDisposable
         Assert.Equal(2.0, table.Points.TotalMass(), 1e-6);
         Assert.True(table.Points.Mass.Distinct().Count() > 100, "mesh masses should differ from cell to cell");
     }
+
+    [Fact]
+    public void Rotation_WritesAVelocityColumn_AtTheAskedFractionOfBreakUp()
+    {
+        string h5 = PathOf("spin.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "2000", "--rotation", "breakup=0.5", "-o", h5, "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        var table = Placement.IO.PointFiles.Read(h5);
+        var v = table.Find("velocity");
+        Assert.NotNull(v);
+        // Ω = 0.5 √(GM/R³) = 0.5 in solar units (G = 1): |v| = Ω × cylindrical radius.
+        var p = table.Points;
+        for (int i = 0; i < p.Count; i += 50)
+        {
+            double speed = Math.Sqrt(v!.Components[0][i] * v.Components[0][i] + v.Components[1][i] * v.Components[1][i] + v.Components[2][i] * v.Components[2][i]);
+            Assert.Equal(0.5 * Math.Sqrt(p.X[i] * p.X[i] + p.Y[i] * p.Y[i]), speed, 1e-12);
+        }
+        (code, _, error) = CliRunner.Run("place", "-p", "demo", "-n", "100", "--rotation", "fast", "-o", PathOf("bad.h5"));
+        Assert.Equal(ExitCodes.Usage, code);
+        Assert.Contains("--rotation", error);
+    }
 }
