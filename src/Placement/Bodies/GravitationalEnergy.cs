@@ -1,0 +1,84 @@
+using Placement.Parallelism;
+using Placement.Points;
+using Placement.Profiles;
+
+namespace Placement.Bodies;
+
+/// <summary>Gravitational potential energy of a placed body and of its profile.</summary>
+/// <remarks>
+/// Points: W = −G Σ_{i&lt;j} m_i m_j / |x_i − x_j| by exact pairwise summation (no softening, no approximation; cost
+/// N²/2 pair terms, about a minute for 2e5 points on two cores — a tree method for larger sets is future work).
+/// Rows are summed in fixed chunks and the chunk sums added in order, so the result does not depend on the thread
+/// count. Profile: W = −G ∫₀^R M(r) dM(r)/r = −G ∫₀^R 4π r ρ(r) M(r) dr by composite Gauss–Legendre quadrature on
+/// radii spaced in enclosed mass. For a polytrope of index n, W = −3GM²/((5 − n)R) (Chandrasekhar 1939, via the
+/// standard textbook result).
+/// </remarks>
+public static class GravitationalEnergy
+{
+    /// <summary>Pairwise potential energy of the points, in mass·length²/time² of their unit system.</summary>
+    /// <exception cref="ArgumentException">Two points coincide.</exception>
+    public static double OfPoints(PointSet points, ParallelSettings? parallel = null)
+    {
+        ArgumentNullException.ThrowIfNull(points);
+        int n = points.Count;
+        if (n < 2) return 0;
+        var x = points.X; var y = points.Y; var z = points.Z; var m = points.Mass;
+        // Rows i pair with j > i; chunk by rows so that chunks hold similar work (row i costs n − i).
+        int chunks = Math.Min(256, n);
+        var rowStart = new int[chunks + 1];
+        double total = (double)n * (n - 1) / 2;
+        for (int c = 1; c < chunks; c++)
+        {
+            // First row whose cumulative pair count reaches c/chunks of the total.
+            double target = total * c / chunks;
+            double rows = n - 0.5 - Math.Sqrt((n - 0.5) * (n - 0.5) - 2 * target);
+            rowStart[c] = Math.Clamp((int)rows, rowStart[c - 1], n);
+        }
+        rowStart[chunks] = n;
+        var partial = new double[chunks];
+        ParallelLoop.For(chunks, (parallel ?? ParallelSettings.Default) with { MinimumChunk = 1 }, (c0, c1) =>
+        {
+            for (int c = c0; c < c1; c++)
+            {
+                double sum = 0;
+                for (int i = rowStart[c]; i < rowStart[c + 1]; i++)
+                {
+                    double xi = x[i], yi = y[i], zi = z[i], row = 0;
+                    for (int j = i + 1; j < n; j++)
+                    {
+                        double dx = x[j] - xi, dy = y[j] - yi, dz = z[j] - zi;
+                        double d2 = dx * dx + dy * dy + dz * dz;
+                        if (d2 == 0) throw new ArgumentException($"Points {i} and {j} coincide; the pairwise energy is infinite.", nameof(points));
+                        row += m[j] / Math.Sqrt(d2);
+                    }
+                    sum += m[i] * row;
+                }
+                partial[c] = sum;
+            }
+        });
+        double w = 0;
+        foreach (double p in partial) w += p;
+        return -points.Units.GravitationalConstant * w;
+    }
+
+    /// <summary>W = −G ∫ M(r) dM / r of the profile, in mass·length²/time² of its unit system.</summary>
+    public static double OfProfile(IRadialProfile profile, int panels = 2000)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        // Integrate in the mass coordinate: W = −G ∫₀^M m / r(m) dm, with 4-point Gauss–Legendre on equal mass panels;
+        // the integrand m/r(m) ~ m^(2/3) near the centre is integrable and smooth enough for this rule.
+        double[] nodes = [-0.8611363115940526, -0.3399810435848563, 0.3399810435848563, 0.8611363115940526];
+        double[] weights = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538];
+        double total = profile.TotalMass, w = 0, dm = total / panels;
+        for (int k = 0; k < panels; k++)
+        {
+            double mid = (k + 0.5) * dm;
+            for (int q = 0; q < 4; q++)
+            {
+                double mm = mid + 0.5 * dm * nodes[q];
+                w += weights[q] * 0.5 * dm * mm / profile.RadiusOfEnclosedMass(mm);
+            }
+        }
+        return -profile.Units.GravitationalConstant * w;
+    }
+}
