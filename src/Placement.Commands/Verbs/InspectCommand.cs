@@ -56,6 +56,8 @@ internal static class InspectCommand
                     summary.TotalMass, summary.OuterRadius, summary.CentralDensity, summary.MeanDensity, summary.MaxDensity,
                     summary.MinPositiveDensity, summary.DensityContrast, summary.Radius10, summary.HalfMassRadius, summary.Radius90,
                     summary.QuantityNames, summary.Fingerprint,
+                    bindingEnergy = Bodies.GravitationalEnergy.OfProfile(body),
+                    virialRatio = resolution is null ? double.NaN : Bodies.ThermalEnergy.VirialRatio(body),
                     resolution = resolution is null ? null : new
                     {
                         resolution.PressureQuantity, resolution.Count, resolution.WantedCellsPerScaleHeight, resolution.MassFraction,
@@ -66,6 +68,12 @@ internal static class InspectCommand
                 return ExitCodes.Ok;
             }
             context.Output.WriteLine(summary.ToString());
+            double binding = Bodies.GravitationalEnergy.OfProfile(body);
+            context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"binding energy   W = {binding:G6} {body.Units.MassUnitName} {body.Units.LengthUnitName}^2/{body.Units.TimeUnitName}^2 (-G ∫ M dM / r)"));
+            if (resolution is not null)
+                context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"virial ratio     3∫P dV / -W = {Bodies.ThermalEnergy.VirialRatio(body):F6} (1 in hydrostatic equilibrium)"));
             if (resolution is null)
             {
                 context.Output.WriteLine("pressure         not carried: no scale heights");

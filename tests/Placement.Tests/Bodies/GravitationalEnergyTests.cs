@@ -37,3 +37,24 @@ public class GravitationalEnergyTests
         Assert.Equal(-7.5, GravitationalEnergy.OfPoints(pair), 14); // −G m1 m2 / d with G = 1
     }
 }
+
+public class ThermalEnergyTests
+{
+    [Theory]
+    [InlineData(1.0)]
+    [InlineData(3.0)]
+    public void Polytrope_SatisfiesTheVirialTheorem(double n)
+    {
+        // Hydrostatic equilibrium ⇒ 3∫P dV = −W (virial theorem, standard textbook result).
+        var body = new Polytrope(n, 1.0, 1.0, UnitSystem.Solar);
+        Assert.Equal(1.0, ThermalEnergy.VirialRatio(body), 1e-4);
+        Assert.Throws<InvalidOperationException>(() => ThermalEnergy.OfProfile(new UniformSphere(1, 1), 5.0 / 3.0));
+    }
+
+    [Fact]
+    public void InventedDemoStar_IsInHydrostaticEquilibrium()
+    {
+        // The demo star's pressure is integrated from hydrostatic equilibrium, so the virial theorem must hold too.
+        Assert.Equal(1.0, ThermalEnergy.VirialRatio(DemoBodies.TwoZoneStar()), 1e-3);
+    }
+}
