@@ -65,20 +65,8 @@ public static class GravitationalEnergy
     public static double OfProfile(IRadialProfile profile, int panels = 2000)
     {
         ArgumentNullException.ThrowIfNull(profile);
-        // Integrate in the mass coordinate: W = −G ∫₀^M m / r(m) dm, with 4-point Gauss–Legendre on equal mass panels;
-        // the integrand m/r(m) ~ m^(2/3) near the centre is integrable and smooth enough for this rule.
-        double[] nodes = [-0.8611363115940526, -0.3399810435848563, 0.3399810435848563, 0.8611363115940526];
-        double[] weights = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538];
-        double total = profile.TotalMass, w = 0, dm = total / panels;
-        for (int k = 0; k < panels; k++)
-        {
-            double mid = (k + 0.5) * dm;
-            for (int q = 0; q < 4; q++)
-            {
-                double mm = mid + 0.5 * dm * nodes[q];
-                w += weights[q] * 0.5 * dm * mm / profile.RadiusOfEnclosedMass(mm);
-            }
-        }
+        // W = −G ∫₀^M m / r(m) dm; the integrand ~ m^(2/3) near the centre is integrable and smooth enough here.
+        double w = MassCoordinateQuadrature.Integrate(profile, (m, r) => m / r, panels);
         return -profile.Units.GravitationalConstant * w;
     }
 }

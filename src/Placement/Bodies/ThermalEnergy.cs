@@ -20,19 +20,11 @@ public static class ThermalEnergy
         if (!(gamma > 1)) throw new ArgumentOutOfRangeException(nameof(gamma), gamma, "The adiabatic index must exceed 1.");
         string name = ScaleHeights.PressureQuantity(profile)
             ?? throw new InvalidOperationException("The profile carries no pressure, so its thermal energy is undefined.");
-        double[] nodes = [-0.8611363115940526, -0.3399810435848563, 0.3399810435848563, 0.8611363115940526];
-        double[] weights = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538];
-        double total = profile.TotalMass, u = 0, dm = total / panels;
-        for (int k = 0; k < panels; k++)
+        double u = MassCoordinateQuadrature.Integrate(profile, (_, r) =>
         {
-            double mid = (k + 0.5) * dm;
-            for (int q = 0; q < 4; q++)
-            {
-                double r = profile.RadiusOfEnclosedMass(mid + 0.5 * dm * nodes[q]);
-                double rho = profile.Density(r);
-                if (rho > 0 && profile.TryQuantity(name, r, out double p)) u += weights[q] * 0.5 * dm * p / rho;
-            }
-        }
+            double rho = profile.Density(r);
+            return rho > 0 && profile.TryQuantity(name, r, out double p) ? p / rho : 0;
+        }, panels);
         return u / (gamma - 1);
     }
 
