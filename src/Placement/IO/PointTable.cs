@@ -49,6 +49,12 @@ public sealed class PointTable
         }
     }
 
+    /// <summary>
+    /// Point masses that travel with the points (a softened core, companions), in the point set's units; empty by
+    /// default. Writers record them apart from the per-point columns (see docs/file-formats.md).
+    /// </summary>
+    public List<Bodies.PointMass> PointMasses { get; } = [];
+
     /// <summary>Extra columns in the order they were added.</summary>
     public IReadOnlyList<PointColumn> Columns => _columns;
 
@@ -107,6 +113,7 @@ public sealed class PointTable
     public void CheckValidity()
     {
         Points.CheckValidity();
+        foreach (var pointMass in PointMasses) pointMass.CheckValidity();
         if (_ids is not null && _ids.Length != Count)
             throw new InvalidOperationException($"Ids has {_ids.Length} values but the point set has {Count} points.");
         foreach (var column in _columns)
