@@ -27,14 +27,19 @@ internal static class InspectCommand
             Description = "A point count to evaluate: the report shows the cells per H_P it gives.",
             DefaultValueFactory = _ => 100_000,
         };
+        var core = new CoreReplacementArguments();
+        var overwrite = new Option<bool>("--overwrite") { Description = "Replace the --write-profile file if it exists." };
         var command = new Command("inspect", "Summarise a profile: mass, radius, densities and contrast, and where pressure is known the pressure scale heights and the points needed to resolve them.");
         profile.AddTo(command);
         command.Options.Add(cells);
         command.Options.Add(fraction);
         command.Options.Add(count);
+        core.AddTo(command, withWriteProfile: true);
+        command.Options.Add(overwrite);
         command.SetAction(parse =>
         {
-            var body = profile.Load(parse);
+            var (body, replaced) = core.Apply(parse, profile.Load(parse));
+            string? written = core.Write(parse, body, replaced, parse.GetValue(overwrite));
             var summary = ProfileSummary.Of(body);
             ResolutionReport? resolution = null;
             if (ScaleHeights.PressureQuantity(body) is not null)
@@ -64,10 +69,14 @@ internal static class InspectCommand
                         resolution.MaxPointsNeeded, resolution.LimitingRadius, resolution.Radius, resolution.ScaleHeight,
                         resolution.CellsPerScaleHeight, resolution.PointsNeeded,
                     },
+                    coreReplacement = replaced is null ? null : CoreReplacementArguments.Json(replaced),
+                    profileTable = written,
                 }, CliJson.Options));
                 return ExitCodes.Ok;
             }
             context.Output.WriteLine(summary.ToString());
+            if (replaced is not null) foreach (string line in CoreReplacementArguments.Lines(replaced)) context.Output.WriteLine(line);
+            if (written is not null) context.Output.WriteLine($"profile table written to {written}");
             double binding = Bodies.GravitationalEnergy.OfProfile(body);
             context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"binding energy   W = {binding:G6} {body.Units.MassUnitName} {body.Units.LengthUnitName}^2/{body.Units.TimeUnitName}^2 (-G ∫ M dM / r)"));

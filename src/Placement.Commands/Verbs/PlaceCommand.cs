@@ -23,6 +23,7 @@ internal static class PlaceCommand
             Required = true,
         };
         var outputs = new OutputArguments();
+        var core = new CoreReplacementArguments();
         var rotation = new Option<string?>("--rotation")
         {
             Description = "Give the points a rotation velocity about the z axis: 'omega=W' (W in 1/time of the unit system) or "
@@ -33,6 +34,7 @@ internal static class PlaceCommand
         sampling.AddTo(command);
         command.Options.Add(output);
         command.Options.Add(rotation);
+        core.AddTo(command, withWriteProfile: false);
         outputs.AddTo(command);
         command.SetAction(parse =>
         {
@@ -48,7 +50,7 @@ internal static class PlaceCommand
             }
             OutputArguments.CheckWritable(replace, path);
             outputs.CheckReportOutputs(parse);
-            var body = context.Stage("loading profile", _ => profile.Load(parse));
+            var (body, replaced) = core.Apply(parse, context.Stage("loading profile", _ => profile.Load(parse)));
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
             var clock = Stopwatch.StartNew();
@@ -56,6 +58,7 @@ internal static class PlaceCommand
             double seconds = clock.Elapsed.TotalSeconds;
             result.Points.CheckValidity();
             var table = new PointTable(result.Points);
+            if (replaced?.Core is { } pointMass) table.PointMasses.Add(pointMass);
             if (request.Mode == SamplingMode.MeshGenerators)
             {
                 // Mesh generators: each point's mass becomes the profile mass of its own Voronoi cell (∫ρ dV by quadrature),
@@ -88,13 +91,15 @@ internal static class PlaceCommand
             }
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
-                result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray());
+                result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray(),
+                replaced is null ? null : CoreReplacementArguments.Json(replaced));
             if (context.Json) context.Output.WriteLine(JsonSerializer.Serialize(summary, CliJson.Options));
             else if (!context.Quiet)
             {
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                     $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
+                if (replaced is not null) foreach (string line in CoreReplacementArguments.Lines(replaced)) context.Output.WriteLine(line);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;
@@ -115,5 +120,5 @@ internal static class PlaceCommand
 
     private sealed record PlaceSummary(
         string Output, string Sampler, int Points, int RequestedPoints, ulong Seed, string Units,
-        double TotalMass, double ProfileMass, double Seconds, string[] Notes);
+        double TotalMass, double ProfileMass, double Seconds, string[] Notes, object? CoreReplacement);
 }
