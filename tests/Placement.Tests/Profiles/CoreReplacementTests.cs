@@ -128,6 +128,21 @@ public class CoreReplacementTests
     }
 
     [Fact]
+    public void CentralCusp_IsReplacedByAFiniteCentre()
+    {
+        // Hernquist sphere (ρ ∝ 1/r at the centre) tabulated, with the table's own hydrostatic pressure.
+        var cusp = TabulatedProfile.FromProfile(new HernquistSphere(1, 0.1, 5, UnitSystem.Solar), 1500).WithHydrostaticPressure();
+        var gas = CoreReplacement.Apply(cusp, new CoreReplacementOptions(0.05) { Index = 3 });
+        var rep = gas.Report;
+        gas.CheckValidity();
+        Assert.True(double.IsPositiveInfinity(rep.OriginalCentralDensity) || rep.OriginalCentralDensity > 1e3 * rep.CentralDensity);
+        Assert.True(double.IsFinite(rep.CentralDensity) && rep.CentralDensity > rep.DensityAtCut);
+        // Measured: m_c = 0.29 M(r_c), residuals ≤ 1e-15 at the cut, hydrostatic inside 2e-9.
+        Assert.InRange(rep.CoreMass / rep.OriginalMassInsideCut, 0.05, 0.95);
+        Assert.True(rep.DensityMismatch < 1e-10 && rep.MassMismatch < 1e-10 && rep.HydrostaticInside.Max < 1e-6, rep.ToString());
+    }
+
+    [Fact]
     public void InventedGiant_SameBodyInCgs_GivesTheSameCoreFraction()
     {
         // The solver must not depend on the size of the numbers: the same invented body in cm and g/cm^3.
