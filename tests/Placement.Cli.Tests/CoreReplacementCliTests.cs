@@ -71,6 +71,13 @@ public sealed class CoreReplacementCliTests : IDisposable
         Assert.Equal(1.0 - core, root.GetProperty("totalMass").GetDouble(), 1e-10);
         Assert.True(File.Exists(h5));
 
+        // Checking the points against the same replaced profile: HEALPix shells hold exact shell masses, so the enclosed
+        // mass at every shell agrees to rounding (1e-10 allowed).
+        (code, output, error) = CliRunner.Run("check", "--points", h5, "-p", "polytrope:n=3", "--replace-core", "radius=0.2,index=1.5", "--no-baseline", "--json", "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        using (var check = JsonDocument.Parse(output))
+            Assert.True(check.RootElement.GetProperty("enclosedMass").GetProperty("maxRelativeError").GetDouble() < 1e-10);
+
         (code, output, error) = CliRunner.Run("place", "-p", "polytrope:n=3", "--replace-core", "radius=0.2,index=1.5", "-n", "3000", "-o", PathOf("b.h5"));
         Assert.True(code == ExitCodes.Ok, error);
         Assert.Contains("core mass m_c = 0.0201", output);

@@ -27,11 +27,13 @@ internal static class CheckCommand
             DefaultValueFactory = _ => 0,
         };
         var outputs = new OutputArguments();
+        var core = new CoreReplacementArguments();
         var command = new Command("check", "Measure a point file against its profile on its Voronoi cells: cell-volume scatter, radial density, enclosed mass, mesh regularity, with a Poisson baseline.");
         command.Options.Add(points);
         profile.AddTo(command);
         command.Options.Add(seed);
         command.Options.Add(threads);
+        core.AddTo(command, withWriteProfile: false);
         outputs.AddTo(command);
         command.SetAction(parse =>
         {
@@ -47,7 +49,7 @@ internal static class CheckCommand
             {
                 throw new CliException(ExitCodes.BadInput, ex.Message, ex);
             }
-            var body = profile.Load(parse);
+            var (body, _) = core.Apply(parse, profile.Load(parse));
             if (table.Points.Units.Name != body.Units.Name)
                 throw new CliException(ExitCodes.BadInput,
                     $"'{path}' is in '{table.Points.Units.Name}' units but the profile is in '{body.Units.Name}'; pass --units {table.Points.Units.Name}.");
