@@ -104,6 +104,14 @@ public class CoreReplacementTests
         Assert.Equal(0.0, gas.CoreMass);
     }
 
+    [Fact]
+    public void LocalIndex_WhereTheStructureGivesNoIndex_IsRejectedNamingTheExponent()
+    {
+        // Outside the body ρ = P = 0: the exponent is undefined and the message says so instead of returning NaN.
+        var ex = Assert.Throws<ArgumentException>(() => CoreReplacement.LocalIndex(new Polytrope(3, 1, 1, UnitSystem.Solar), 1.5));
+        Assert.Contains("d ln P/d ln ρ", ex.Message);
+    }
+
     [Theory]
     [InlineData(3.0)]
     [InlineData(1.5)]
