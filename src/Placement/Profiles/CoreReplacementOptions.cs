@@ -16,8 +16,8 @@ public sealed record CoreReplacementOptions(double CutRadius)
     /// <summary>h / r_c used when <see cref="SofteningLength"/> is null; in (0, 1]. Default 1.</summary>
     /// <remarks>
     /// h ≤ r_c keeps the core's gravity Newtonian outside the cut, so the untouched envelope stays in the equilibrium it had.
-    /// The published method ties the softening length to the cut radius (Ohlmann et al. 2017, A&amp;A 599, A5; the exact
-    /// ratio they used is not confirmed here, so h = r_c is our own default).
+    /// From memory (not confirmed here), the published method ties the softening length to the cut radius (Ohlmann et al.
+    /// 2017, A&amp;A 599, A5); h = r_c is our own default, the largest softening that leaves the envelope untouched.
     /// </remarks>
     public double SofteningRatio { get; init; } = DefaultSofteningRatio;
 
