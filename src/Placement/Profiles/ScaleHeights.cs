@@ -16,13 +16,8 @@ namespace Placement.Profiles;
 public static class ScaleHeights
 {
     /// <summary>The name of the quantity used as pressure, or null when the profile carries none.</summary>
-    public static string? PressureQuantity(IRadialProfile profile)
-    {
-        ArgumentNullException.ThrowIfNull(profile);
-        foreach (var q in profile.Quantities)
-            if (q.Unit.Length == -1 && q.Unit.Mass == 1 && q.Unit.Time == -2 && q.Unit.Temperature == 0) return q.Name;
-        return null;
-    }
+    /// <exception cref="ArgumentNullException"><paramref name="profile"/> is null.</exception>
+    public static string? PressureQuantity(IRadialProfile profile) => QuantityLookup.FirstWithDimension(profile, -1, 1, -2, 0);
 
     /// <summary>H_P at radius r (length units), or NaN where it is undefined (no pressure, r = 0, ρ = 0).</summary>
     public static double PressureScaleHeight(IRadialProfile profile, double r)
