@@ -129,7 +129,13 @@ public static class ThermodynamicFields
             total.Pressure.Result(), total.Entropy.Result(), total.Density.Result(), total.Undefined);
     }
 
-    internal static bool IsSpecificEnergy(PhysicalUnit unit) => unit is { Length: 2, Mass: 0, Time: -2, Temperature: 0 };
+    /// <summary>True when <paramref name="unit"/> has the dimension of a specific energy, length²/time² (e.g. erg/g).</summary>
+    /// <exception cref="ArgumentNullException"><paramref name="unit"/> is null.</exception>
+    public static bool IsSpecificEnergy(PhysicalUnit unit)
+    {
+        ArgumentNullException.ThrowIfNull(unit);
+        return unit is { Length: 2, Mass: 0, Time: -2, Temperature: 0 };
+    }
 
     /// <summary>Per-chunk sums of the three deviations, merged in chunk order (thread-count independent).</summary>
     private struct DeviationSums
