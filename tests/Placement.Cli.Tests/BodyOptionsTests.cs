@@ -94,6 +94,63 @@ public sealed class BodyOptionsTests : IDisposable
         Assert.True(energy.GetProperty("points").GetProperty("kinetic").GetDouble() > 0);
     }
 
+    [Fact]
+    public void Place_WithTheTablesOwnInternalEnergy_UsesIt_AndInspectShowsBothThermalEnergies()
+    {
+        // An INVENTED cgs table: an n = 1 polytrope shape (ρ = ρc sin x / x, P = Kρ²) with u = 1.1 P/(0.4 ρ), i.e. an
+        // equation of state 10 % off the γ = 1.4 ideal gas, so the two sources must differ by exactly that factor.
+        string table = PathOf("invented.txt");
+        var lines = new List<string> { "# invented table, not a real star", "r[cm] rho[g/cm^3] P[dyn/cm^2] eint[erg/g] T[K]" };
+        const double radius = 7e10, rhoC = 5, k = 4e14;
+        for (int i = 0; i <= 400; i++)
+        {
+            double r = radius * i / 400, x = Math.PI * i / 400, rho = i == 0 ? rhoC : i == 400 ? 0 : rhoC * Math.Sin(x) / x;
+            double p = k * rho * rho, e = rho > 0 ? 1.1 * p / (0.4 * rho) : 0;
+            lines.Add(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{r:R} {rho:R} {p:R} {e:R} {1e7 * rho / rhoC + 1e4:R}"));
+        }
+        File.WriteAllLines(table, lines);
+        string h5 = PathOf("table.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", table, "--units", "cgs", "-n", "2000", "-o", h5, "--gamma", "1.4",
+            "--energy-source", "profile:eint", "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        var points = PointFiles.Read(h5);
+        Assert.Equal("profile:eint", points.BodyLabels[BodyNames.EnergySource]);
+        var u = points.Find(PointColumnNames.InternalEnergy)!;
+        var pressure = points.Find(PointColumnNames.Pressure)!;
+        var temperature = points.Find(PointColumnNames.Temperature)!;
+        Assert.Equal("cm^2/s^2", u.Unit);
+        Assert.Equal("K", temperature.Unit);
+        Assert.NotNull(points.Find("eint"));
+        for (int i = 0; i < points.Count; i += 41)
+        {
+            double ideal = pressure.Components[0][i] / (0.4 * points.Points.TargetDensity[i]);
+            // Both columns are interpolated from the same table rows (monotone cubics): the ratio holds to 1e-3.
+            Assert.Equal(1.1, u.Components[0][i] / ideal, 1e-3);
+        }
+        var (inspectCode, output, inspectError) = CliRunner.Run("inspect", "-p", table, "--units", "cgs", "--gamma", "1.4", "--json");
+        Assert.True(inspectCode == ExitCodes.Ok, inspectError);
+        using var doc = JsonDocument.Parse(output);
+        double idealGas = doc.RootElement.GetProperty("thermalEnergy").GetDouble();
+        Assert.Equal("eint", doc.RootElement.GetProperty("internalEnergyQuantity").GetString());
+        Assert.Equal(1.1, doc.RootElement.GetProperty("thermalEnergyFromTable").GetDouble() / idealGas, 1e-3);
+    }
+
+    [Fact]
+    public void Inspect_Polytrope_ShowsTheThermalEnergyOfTheVirialTheorem()
+    {
+        // 3(γ − 1)U = −W (virial theorem) with W = −3GM²/((5 − n)R) = −1.5 for n = 3 (Chandrasekhar 1939): U = 0.75 at γ = 5/3.
+        var (code, output, error) = CliRunner.Run("inspect", "-p", "polytrope:n=3", "--json");
+        Assert.True(code == ExitCodes.Ok, error);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal(0.75, doc.RootElement.GetProperty("thermalEnergy").GetDouble(), 1e-4);
+        (code, output, error) = CliRunner.Run("inspect", "-p", "polytrope:n=3");
+        Assert.True(code == ExitCodes.Ok, error);
+        Assert.Contains("thermal energy", output);
+        (code, _, error) = CliRunner.Run("inspect", "-p", "polytrope:n=3", "--gamma", "0.5");
+        Assert.Equal(ExitCodes.Usage, code);
+        Assert.Contains("--gamma", error);
+    }
+
     [Theory]
     [InlineData("polytrope:n=1.5", "--gamma=1", "--gamma")]
     [InlineData("uniform:mass=1,radius=1", "--gamma=1.4", "pressure")]
