@@ -65,8 +65,8 @@ public static class GravitationalEnergy
     /// <remarks>
     /// W = −(G/2) Σ_i m_i Σ_{j≠i} m_j / |x_i − x_j| with the inner sum over far nodes replaced by their multipole
     /// expansion (Barnes &amp; Hut 1986, Nature 324, 446; node test r &gt; s/θ + δ, see the tree's notes). θ = 0 is the exact
-    /// sum. Accuracy measured against <see cref="OfPoints"/> (tests): at θ = 0.5 the relative error of W was −1.4e-6 on 2e4
-    /// shell points of an n = 3 polytrope and −5e-7 on 2e4 Poisson points of a Plummer sphere (tested to 1e-5). Cost O(N log N); the tree is built on one thread, potentials are
+    /// sum. Accuracy measured against <see cref="OfPoints"/> (tests): at θ = 0.5 the relative error of W was −9.9e-7 on 2e4
+    /// shell points of an n = 3 polytrope and −5.4e-7 on 2e4 Poisson points of a Plummer sphere (tested to 1e-5). Cost O(N log N); the tree is built on one thread, potentials are
     /// computed in fixed chunks and summed in tree order, so the result is bit-identical for any thread count.
     /// </remarks>
     /// <param name="points">The points.</param>

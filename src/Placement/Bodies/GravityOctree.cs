@@ -156,49 +156,87 @@ internal sealed class GravityOctree
     }
 
     /// <summary>Σ_j≠i m_j / |x_i − x_j| (the potential without −G) for every point, in tree order.</summary>
+    /// <remarks>
+    /// One walk per leaf serves all its points (Barnes 1990's grouping): a node is used for the whole leaf when
+    /// (r − b) θ &gt; s + δ θ, r the distance from the centre of the leaf's bounding sphere (radius b) to the node's centre of
+    /// mass, which implies the per-point test for every point of the leaf; otherwise it is opened, and a leaf that is
+    /// opened is summed directly. Each point's sum runs in the walk's fixed order.
+    /// </remarks>
     /// <param name="theta">Opening angle θ in [0, 1].</param>
-    /// <param name="parallel">Parallelism; each point's sum runs in a fixed order, so the bits do not depend on it.</param>
+    /// <param name="parallel">Parallelism over leaves; the bits do not depend on it.</param>
     /// <exception cref="ArgumentException">Two points coincide.</exception>
     public double[] Potentials(double theta, ParallelSettings parallel)
     {
-        int n = _x.Length;
-        var phi = new double[n];
-        ParallelLoop.For(n, parallel with { MinimumChunk = Math.Min(parallel.MinimumChunk, 256) }, (start, end) =>
+        var phi = new double[_x.Length];
+        var leaves = Leaves();
+        ParallelLoop.For(leaves.Length, parallel with { MinimumChunk = Math.Min(parallel.MinimumChunk, 32) }, (start, end) =>
         {
             var stack = new int[8 * (MaxDepth + 2)];
-            for (int s = start; s < end; s++) phi[s] = PotentialAt(s, theta, stack);
+            for (int l = start; l < end; l++) LeafPotentials(leaves[l], theta, stack, phi);
         });
         return phi;
     }
 
-    private double PotentialAt(int s, double theta, int[] stack)
+    /// <summary>Leaf node indices in tree order (depth first, children in octant order).</summary>
+    private int[] Leaves()
     {
-        double px = _x[s], py = _y[s], pz = _z[s], sum = 0;
+        var leaves = new List<int>();
+        var stack = new Stack<int>();
+        stack.Push(0);
+        while (stack.Count > 0)
+        {
+            int k = stack.Pop();
+            if (_nodes[k].ChildCount == 0) { leaves.Add(k); continue; }
+            for (int c = _nodes[k].FirstChild + _nodes[k].ChildCount - 1; c >= _nodes[k].FirstChild; c--) stack.Push(c);
+        }
+        return [.. leaves];
+    }
+
+    private void LeafPotentials(int leaf, double theta, int[] stack, double[] phi)
+    {
+        int s0 = _nodes[leaf].Start, s1 = _nodes[leaf].End;
+        double minX = double.PositiveInfinity, minY = minX, minZ = minX, maxX = double.NegativeInfinity, maxY = maxX, maxZ = maxX;
+        for (int s = s0; s < s1; s++)
+        {
+            minX = Math.Min(minX, _x[s]); maxX = Math.Max(maxX, _x[s]);
+            minY = Math.Min(minY, _y[s]); maxY = Math.Max(maxY, _y[s]);
+            minZ = Math.Min(minZ, _z[s]); maxZ = Math.Max(maxZ, _z[s]);
+        }
+        double cx = 0.5 * (minX + maxX), cy = 0.5 * (minY + maxY), cz = 0.5 * (minZ + maxZ);
+        double b = 0.5 * Math.Sqrt((maxX - minX) * (maxX - minX) + (maxY - minY) * (maxY - minY) + (maxZ - minZ) * (maxZ - minZ));
         int top = 0;
         stack[top++] = 0;
         var nodes = _nodes;
         while (top > 0)
         {
             ref var node = ref nodes[stack[--top]];
-            double rx = px - node.X, ry = py - node.Y, rz = pz - node.Z;
-            double r2 = rx * rx + ry * ry + rz * rz;
-            double reach = node.Size + node.Delta * theta;
-            if (r2 * theta * theta > reach * reach)
+            double ox = cx - node.X, oy = cy - node.Y, oz = cz - node.Z;
+            double gap = Math.Sqrt(ox * ox + oy * oy + oz * oz) - b;
+            if (gap * theta > node.Size + node.Delta * theta)
             {
-                double inv2 = 1 / r2, inv = Math.Sqrt(inv2);
-                double quad = node.Qxx * rx * rx + node.Qyy * ry * ry + node.Qzz * rz * rz
-                    + 2 * (node.Qxy * rx * ry + node.Qxz * rx * rz + node.Qyz * ry * rz);
-                sum += node.M * inv + 0.5 * quad * inv2 * inv2 * inv;
+                for (int s = s0; s < s1; s++)
+                {
+                    double rx = _x[s] - node.X, ry = _y[s] - node.Y, rz = _z[s] - node.Z;
+                    double inv2 = 1 / (rx * rx + ry * ry + rz * rz), inv = Math.Sqrt(inv2);
+                    double quad = node.Qxx * rx * rx + node.Qyy * ry * ry + node.Qzz * rz * rz
+                        + 2 * (node.Qxy * rx * ry + node.Qxz * rx * rz + node.Qyz * ry * rz);
+                    phi[s] += node.M * inv + 0.5 * quad * inv2 * inv2 * inv;
+                }
             }
             else if (node.ChildCount == 0)
             {
-                for (int j = node.Start; j < node.End; j++)
+                for (int s = s0; s < s1; s++)
                 {
-                    if (j == s) continue;
-                    double dx = _x[j] - px, dy = _y[j] - py, dz = _z[j] - pz;
-                    double d2 = dx * dx + dy * dy + dz * dz;
-                    if (d2 == 0) throw new ArgumentException($"Points {_order[s]} and {_order[j]} coincide; the potential energy is infinite.");
-                    sum += _m[j] / Math.Sqrt(d2);
+                    double px = _x[s], py = _y[s], pz = _z[s], sum = 0;
+                    for (int j = node.Start; j < node.End; j++)
+                    {
+                        if (j == s) continue;
+                        double dx = _x[j] - px, dy = _y[j] - py, dz = _z[j] - pz;
+                        double d2 = dx * dx + dy * dy + dz * dz;
+                        if (d2 == 0) throw new ArgumentException($"Points {_order[s]} and {_order[j]} coincide; the potential energy is infinite.");
+                        sum += _m[j] / Math.Sqrt(d2);
+                    }
+                    phi[s] += sum;
                 }
             }
             else
@@ -206,7 +244,6 @@ internal sealed class GravityOctree
                 for (int c = node.FirstChild + node.ChildCount - 1; c >= node.FirstChild; c--) stack[top++] = c;
             }
         }
-        return sum;
     }
 
     /// <summary>Mass of the point at tree position s.</summary>
