@@ -24,11 +24,13 @@ internal static class QualityRun
     }
 
     /// <summary>Writes the JSON report and the figures where asked (atomically; existing files only with overwrite).</summary>
-    public static void WriteOutputs(CliContext context, QualityReport report, PointSet points, IRadialProfile profile, string? reportPath, string? plotsDirectory, bool overwrite)
+    /// <remarks>With <paramref name="body"/> (place only) the JSON report gains a top-level "body" property.</remarks>
+    public static void WriteOutputs(CliContext context, QualityReport report, PointSet points, IRadialProfile profile, string? reportPath, string? plotsDirectory, bool overwrite,
+        BodyReport? body = null)
     {
         if (reportPath is not null)
         {
-            string json = QualityJson.Serialize(report);
+            string json = body is null ? QualityJson.Serialize(report) : BodyTables.ReportJson(QualityJson.Serialize(report), body, report.PointCount);
             AtomicFile.Write(reportPath, overwrite, stream =>
             {
                 using var writer = new StreamWriter(stream, leaveOpen: true);

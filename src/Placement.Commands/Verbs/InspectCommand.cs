@@ -29,6 +29,11 @@ internal static class InspectCommand
         };
         var core = new CoreReplacementArguments();
         var overwrite = new Option<bool>("--overwrite") { Description = "Replace the --write-profile file if it exists." };
+        var gamma = new Option<double>("--gamma")
+        {
+            Description = "Adiabatic index for the thermal energy U = ∫ P/((γ-1)ρ) dm of a profile that carries pressure.",
+            DefaultValueFactory = _ => 5.0 / 3.0,
+        };
         var command = new Command("inspect", "Summarise a profile: mass, radius, densities and contrast, and where pressure is known the pressure scale heights and the points needed to resolve them.");
         profile.AddTo(command);
         command.Options.Add(cells);
@@ -36,11 +41,15 @@ internal static class InspectCommand
         command.Options.Add(count);
         core.AddTo(command, withWriteProfile: true);
         command.Options.Add(overwrite);
+        command.Options.Add(gamma);
         command.SetAction(parse =>
         {
             var (body, replaced) = core.Apply(parse, profile.Load(parse));
             string? written = core.Write(parse, body, replaced, parse.GetValue(overwrite));
             var summary = ProfileSummary.Of(body);
+            double g = parse.GetValue(gamma);
+            if (!(g > 1) || !double.IsFinite(g)) throw new CliException(ExitCodes.Usage, $"--gamma must be a finite number > 1, got {g}.");
+            var budget = ProfileBudget.Of(body, g);
             ResolutionReport? resolution = null;
             if (ScaleHeights.PressureQuantity(body) is not null)
             {
@@ -63,6 +72,10 @@ internal static class InspectCommand
                     summary.QuantityNames, summary.Fingerprint,
                     bindingEnergy = Bodies.GravitationalEnergy.OfProfile(body),
                     virialRatio = resolution is null ? double.NaN : Bodies.ThermalEnergy.VirialRatio(body),
+                    gamma = g,
+                    thermalEnergy = budget.IdealGas,
+                    thermalEnergyFromTable = budget.FromTable,
+                    internalEnergyQuantity = budget.TableQuantity,
                     resolution = resolution is null ? null : new
                     {
                         resolution.PressureQuantity, resolution.Count, resolution.WantedCellsPerScaleHeight, resolution.MassFraction,
@@ -80,6 +93,7 @@ internal static class InspectCommand
             double binding = Bodies.GravitationalEnergy.OfProfile(body);
             context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"binding energy   W = {binding:G6} {body.Units.MassUnitName} {body.Units.LengthUnitName}^2/{body.Units.TimeUnitName}^2 (-G ∫ M dM / r)"));
+            foreach (string line in budget.Lines(body.Units)) context.Output.WriteLine(line);
             if (resolution is not null)
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                     $"virial ratio     3∫P dV / -W = {Bodies.ThermalEnergy.VirialRatio(body):F6} (1 in hydrostatic equilibrium)"));

@@ -24,6 +24,7 @@ internal static class PlaceCommand
         };
         var outputs = new OutputArguments();
         var core = new CoreReplacementArguments();
+        var bodyOptions = new BodyArguments();
         var rotation = new Option<string?>("--rotation")
         {
             Description = "Give the points a rotation velocity about the z axis: 'omega=W' (W in 1/time of the unit system) or "
@@ -36,6 +37,7 @@ internal static class PlaceCommand
         command.Options.Add(rotation);
         core.AddTo(command, withWriteProfile: false);
         outputs.AddTo(command);
+        bodyOptions.AddTo(command);
         command.SetAction(parse =>
         {
             string path = parse.GetValue(output)!;
@@ -51,6 +53,10 @@ internal static class PlaceCommand
             OutputArguments.CheckWritable(replace, path);
             outputs.CheckReportOutputs(parse);
             var (body, replaced) = core.Apply(parse, context.Stage("loading profile", _ => profile.Load(parse)));
+            var bodyRequest = bodyOptions.Parse(parse, body, sampling.ModeOf(parse) == SamplingMode.MeshGenerators);
+            bool check = outputs.WantsQuality(parse) && !bodyOptions.SkipsCheck(parse);
+            if (bodyOptions.SkipsCheck(parse) && (parse.GetValue(outputs.Plots) is not null || bodyRequest is null))
+                throw new CliException(ExitCodes.Usage, "--no-check skips the quality check: it goes with --report and a body option (--gamma, --resolution, --energy), not with --plots.");
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
             var clock = Stopwatch.StartNew();
@@ -71,28 +77,33 @@ internal static class PlaceCommand
                 cells.Mass!.CopyTo(result.Points.Mass, 0);
                 table.Add(PointColumnNames.CellVolume, cells.Volume, QuantityDimension.Volume, "Voronoi cell volume (ball domain of the profile radius)");
             }
+            Func<double, double>? angularVelocity = null;
             if (parse.GetValue(rotation) is { } spec)
             {
                 double omega = RotationRate(spec, body);
+                angularVelocity = _ => omega;
                 var (vx, vy, vz) = Bodies.Rotation.Velocities(result.Points, _ => omega, null, request.Parallel);
                 table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units,
                     string.Create(System.Globalization.CultureInfo.InvariantCulture, $"solid-body rotation about +z, Omega = {omega:R} per time unit")));
             }
+            var bodyReport = bodyRequest is null ? null : BodyRun.Run(context, bodyRequest, table, body, request.Parallel!, angularVelocity);
             context.Stage($"writing {path}", _ =>
             {
                 PointFiles.Write(table, path, replace);
                 return 0;
             });
             QualityReport? quality = null;
-            if (outputs.WantsQuality(parse))
+            if (check)
             {
                 quality = QualityRun.Evaluate(context, result.Points, body, !parse.GetValue(outputs.NoBaseline), request.Seed, request.Parallel!);
-                QualityRun.WriteOutputs(context, quality, result.Points, body, parse.GetValue(outputs.Report), parse.GetValue(outputs.Plots), replace);
+                QualityRun.WriteOutputs(context, quality, result.Points, body, parse.GetValue(outputs.Report), parse.GetValue(outputs.Plots), replace, bodyReport);
             }
+            else if (bodyReport is not null && parse.GetValue(outputs.Report) is { } reportPath)
+                BodyTables.WriteReport(context, reportPath, bodyReport, result.Points.Count, replace);
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
                 result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray(),
-                replaced is null ? null : CoreReplacementArguments.Json(replaced));
+                replaced is null ? null : CoreReplacementArguments.Json(replaced), bodyReport);
             if (context.Json) context.Output.WriteLine(JsonSerializer.Serialize(summary, CliJson.Options));
             else if (!context.Quiet)
             {
@@ -100,6 +111,7 @@ internal static class PlaceCommand
                     $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
                 if (replaced is not null) foreach (string line in CoreReplacementArguments.Lines(replaced)) context.Output.WriteLine(line);
+                if (bodyReport is not null) BodyTables.Write(context.Console, bodyReport);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;
@@ -120,5 +132,5 @@ internal static class PlaceCommand
 
     private sealed record PlaceSummary(
         string Output, string Sampler, int Points, int RequestedPoints, ulong Seed, string Units,
-        double TotalMass, double ProfileMass, double Seconds, string[] Notes, object? CoreReplacement);
+        double TotalMass, double ProfileMass, double Seconds, string[] Notes, object? CoreReplacement, BodyReport? Body);
 }

@@ -34,6 +34,12 @@ public static class PointColumnNames
     /// <summary>Specific internal energy (length²/time²).</summary>
     public const string InternalEnergy = "internal_energy";
 
+    /// <summary>Pressure of the profile at the point's radius (mass/(length·time²)).</summary>
+    public const string Pressure = "pressure";
+
+    /// <summary>Temperature of the profile at the point's radius (K).</summary>
+    public const string Temperature = "temperature";
+
     /// <summary>Velocity (3 components, length/time).</summary>
     public const string Velocity = "velocity";
 

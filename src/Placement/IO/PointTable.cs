@@ -55,6 +55,12 @@ public sealed class PointTable
     /// </summary>
     public List<Bodies.PointMass> PointMasses { get; } = [];
 
+    /// <summary>Body-level numbers with units (γ, energies, resolution figures), written to the HDF5 group <c>/body</c>; empty by default.</summary>
+    public List<BodyScalar> BodyScalars { get; } = [];
+
+    /// <summary>Body-level text labels (the energy source, the match chosen …), written as attributes of <c>/body</c>; empty by default.</summary>
+    public SortedDictionary<string, string> BodyLabels { get; } = new(StringComparer.Ordinal);
+
     /// <summary>Extra columns in the order they were added.</summary>
     public IReadOnlyList<PointColumn> Columns => _columns;
 
@@ -106,19 +112,36 @@ public sealed class PointTable
     public long IdOf(int i) => _ids is null ? i : _ids[i];
 
     /// <summary>
-    /// Asserts the invariants: the point set's own (<see cref="PointSet.CheckValidity"/>), and every column
-    /// still has <see cref="Count"/> values per component (arrays may not be swapped after adding).
+    /// Asserts the invariants: the point set's own (<see cref="PointSet.CheckValidity"/>), every column
+    /// still has <see cref="Count"/> values per component (arrays may not be swapped after adding), and the body
+    /// scalars and labels have distinct identifier names.
     /// </summary>
     /// <exception cref="InvalidOperationException">An invariant is broken; the message names the column.</exception>
     public void CheckValidity()
     {
         Points.CheckValidity();
         foreach (var pointMass in PointMasses) pointMass.CheckValidity();
+        CheckBodyValues();
         if (_ids is not null && _ids.Length != Count)
             throw new InvalidOperationException($"Ids has {_ids.Length} values but the point set has {Count} points.");
         foreach (var column in _columns)
             for (int c = 0; c < column.ComponentCount; c++)
                 if (column.Components[c].Length != Count)
                     throw new InvalidOperationException($"Column '{column.Name}' component {c} has {column.Components[c].Length} values; expected {Count}.");
+    }
+
+    private void CheckBodyValues()
+    {
+        var names = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var scalar in BodyScalars)
+        {
+            scalar.CheckValidity();
+            if (!names.Add(scalar.Name)) throw new InvalidOperationException($"Body scalar '{scalar.Name}' is given twice.");
+        }
+        foreach (var (name, value) in BodyLabels)
+        {
+            if (!BodyNames.IsIdentifier(name) || !names.Add(name))
+                throw new InvalidOperationException($"Body label '{name}' is not an identifier or repeats a body scalar's name.");
+        }
     }
 }

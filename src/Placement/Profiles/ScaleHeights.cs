@@ -13,16 +13,11 @@ namespace Placement.Profiles;
 /// user's choice: no published threshold is built in (Zingale et al. 2002 discuss the dependence; their number is not
 /// confirmed here).</para>
 /// </remarks>
-public static class ScaleHeights
+public static partial class ScaleHeights
 {
     /// <summary>The name of the quantity used as pressure, or null when the profile carries none.</summary>
-    public static string? PressureQuantity(IRadialProfile profile)
-    {
-        ArgumentNullException.ThrowIfNull(profile);
-        foreach (var q in profile.Quantities)
-            if (q.Unit.Length == -1 && q.Unit.Mass == 1 && q.Unit.Time == -2 && q.Unit.Temperature == 0) return q.Name;
-        return null;
-    }
+    /// <exception cref="ArgumentNullException"><paramref name="profile"/> is null.</exception>
+    public static string? PressureQuantity(IRadialProfile profile) => QuantityLookup.FirstWithDimension(profile, -1, 1, -2, 0);
 
     /// <summary>H_P at radius r (length units), or NaN where it is undefined (no pressure, r = 0, ρ = 0).</summary>
     public static double PressureScaleHeight(IRadialProfile profile, double r)
@@ -58,6 +53,7 @@ public static class ScaleHeights
         var scale = new double[rows];
         var cells = new double[rows];
         var needed = new double[rows];
+        var spacings = new double[rows];
         double worst = 0, worstRadius = double.NaN;
         for (int i = 0; i < rows; i++)
         {
@@ -67,11 +63,15 @@ public static class ScaleHeights
             radius[i] = r;
             scale[i] = h;
             double spacing = Math.Cbrt(m / (count * rho));
+            spacings[i] = spacing;
             cells[i] = h / spacing;
             needed[i] = m * Math.Pow(cellsPerScaleHeight / h, 3) / rho;
             if (needed[i] > worst) { worst = needed[i]; worstRadius = r; }
         }
-        return new ResolutionReport(profile.Units, name, count, cellsPerScaleHeight, massFraction, radius, scale, cells, needed, worst, worstRadius);
+        return new ResolutionReport(profile.Units, name, count, cellsPerScaleHeight, massFraction, radius, scale, cells, needed, worst, worstRadius)
+        {
+            Spacing = spacings,
+        };
     }
 
     private static double At(IRadialProfile profile, string name, double r, double g)

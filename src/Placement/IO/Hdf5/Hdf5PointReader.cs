@@ -100,7 +100,28 @@ public static class Hdf5PointReader
                 throw new PointFileFormatException(path, $"'/{Hdf5Layout.PointsGroup}/{child.Name}' is not a dataset; only per-point datasets may live in '/{Hdf5Layout.PointsGroup}'.");
             table.Add(datasets.Column(child.Name));
         }
+        if (root.LinkExists(BodyNames.Group)) ReadBody(path, root.Group(BodyNames.Group), table);
         return table;
+    }
+
+    /// <summary>Reads <c>/body</c>: scalar float64 datasets with units, and string attributes as labels.</summary>
+    private static void ReadBody(string path, IH5Group body, PointTable table)
+    {
+        foreach (var child in body.Children())
+        {
+            string where = $"/{BodyNames.Group}/{child.Name}";
+            if (child is not IH5Dataset dataset || dataset.Type.Class != H5DataTypeClass.FloatingPoint || dataset.Space.Dimensions.Length > 1
+                || (dataset.Space.Dimensions.Length == 1 && dataset.Space.Dimensions[0] != 1))
+                throw new PointFileFormatException(path, $"'{where}' is not a scalar float64 dataset; '/{BodyNames.Group}' holds body-level numbers only.");
+            var a = new AttributeReader(path, dataset, where);
+            double factor = dataset.AttributeExists(Hdf5Layout.CgsFactorAttribute) ? a.Float64(Hdf5Layout.CgsFactorAttribute) : double.NaN;
+            string description = dataset.AttributeExists(Hdf5Layout.DescriptionAttribute) ? a.String(Hdf5Layout.DescriptionAttribute) : "";
+            double value = dataset.Space.Dimensions.Length == 0 ? dataset.Read<double>() : dataset.Read<double[]>()[0];
+            table.BodyScalars.Add(new BodyScalar(child.Name, value, a.String(Hdf5Layout.UnitsAttribute), factor, description));
+        }
+        var labels = new AttributeReader(path, body, "/" + BodyNames.Group);
+        foreach (var attribute in body.Attributes())
+            table.BodyLabels[attribute.Name] = labels.String(attribute.Name);
     }
 
     private static UnitSystem ReadUnits(AttributeReader a)

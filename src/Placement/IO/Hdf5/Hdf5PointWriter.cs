@@ -57,6 +57,7 @@ public static class Hdf5PointWriter
 
         var provenance = points.Provenance;
         var file = new H5File { [Hdf5Layout.PointsGroup] = group };
+        if (table.BodyScalars.Count > 0 || table.BodyLabels.Count > 0) file[BodyNames.Group] = BodyGroup(table);
         var a = file.Attributes;
         a[Hdf5Layout.FormatAttribute] = Hdf5Layout.FormatName;
         a[Hdf5Layout.FormatVersionAttribute] = Hdf5Layout.FormatVersion;
@@ -95,6 +96,26 @@ public static class Hdf5PointWriter
                 [Hdf5Layout.DescriptionAttribute] = description,
             },
         };
+    }
+
+    /// <summary>The <c>/body</c> group: one scalar dataset per body scalar (with units), one string attribute per label.</summary>
+    private static H5Group BodyGroup(PointTable table)
+    {
+        var body = new H5Group();
+        foreach (var scalar in table.BodyScalars)
+        {
+            body[scalar.Name] = new H5Dataset(scalar.Value)
+            {
+                Attributes = new()
+                {
+                    [Hdf5Layout.UnitsAttribute] = scalar.Unit,
+                    [Hdf5Layout.CgsFactorAttribute] = scalar.CgsFactor,
+                    [Hdf5Layout.DescriptionAttribute] = scalar.Description,
+                },
+            };
+        }
+        foreach (var (name, value) in table.BodyLabels) body.Attributes[name] = value;
+        return body;
     }
 
     private static long[] Ids(PointTable table)
