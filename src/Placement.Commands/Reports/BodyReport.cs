@@ -29,5 +29,8 @@ internal sealed record BodyEnergySection(
     string EnergyUnit, double OpeningAngle, double Gamma, BodyEnergies Points, BodyEnergies Profile,
     double GravitationalDeviation, double ThermalDeviation, double KineticDeviation);
 
-/// <summary>Gravitational, thermal and kinetic (or rotational) energy, their total and the virial ratio (2K + 3(γ−1)U)/(−W).</summary>
-internal sealed record BodyEnergies(double Gravitational, double Thermal, double Kinetic, double Total, double VirialRatio);
+/// <summary>
+/// Gravitational (gas self-energy), the gas's potential energy in a softened central core's field (0 without one),
+/// thermal and kinetic (or rotational) energy, their total and the virial ratio (2K + 3(γ−1)U)/(−(W + V_core)).
+/// </summary>
+internal sealed record BodyEnergies(double Gravitational, double CorePotential, double Thermal, double Kinetic, double Total, double VirialRatio);

@@ -83,8 +83,8 @@ internal static class BodyRun
                     AngularVelocity = angularVelocity,
                 }, parallel));
             energySection = new BodyEnergySection(EnergyDimension.UnitName(units), budget.OpeningAngle, budget.Gamma,
-                new BodyEnergies(budget.PointsGravitational, budget.PointsThermal, budget.PointsKinetic, budget.PointsTotal, budget.PointsVirialRatio),
-                new BodyEnergies(budget.ProfileGravitational, budget.ProfileThermal, budget.ProfileRotational, budget.ProfileTotal, budget.ProfileVirialRatio),
+                new BodyEnergies(budget.PointsGravitational, budget.PointsCorePotential, budget.PointsThermal, budget.PointsKinetic, budget.PointsTotal, budget.PointsVirialRatio),
+                new BodyEnergies(budget.ProfileGravitational, budget.ProfileCorePotential, budget.ProfileThermal, budget.ProfileRotational, budget.ProfileTotal, budget.ProfileVirialRatio),
                 budget.GravitationalDeviation, budget.ThermalDeviation, budget.KineticDeviation);
             AddNumber(table, BodyNames.OpeningAngle, budget.OpeningAngle, QuantityDimension.Dimensionless, "octree opening angle (0 = exact pairwise sum)");
             AddNumber(table, BodyNames.PointsGravitationalEnergy, budget.PointsGravitational, EnergyDimension, "W of the points, -G sum m_i m_j / r_ij");
@@ -92,6 +92,11 @@ internal static class BodyRun
             AddNumber(table, BodyNames.PointsKineticEnergy, budget.PointsKinetic, EnergyDimension, "1/2 sum m v^2 of the points");
             AddNumber(table, BodyNames.ProfileGravitationalEnergy, budget.ProfileGravitational, EnergyDimension, "-G int M dM / r of the profile");
             AddNumber(table, BodyNames.ProfileThermalEnergy, budget.ProfileThermal, EnergyDimension, "int u dm of the profile");
+            if (profile.CentralPointMass is not null)
+            {
+                AddNumber(table, BodyNames.PointsCorePotentialEnergy, budget.PointsCorePotential, EnergyDimension, "sum m Phi_core of the points in the softened core's potential");
+                AddNumber(table, BodyNames.ProfileCorePotentialEnergy, budget.ProfileCorePotential, EnergyDimension, "int Phi_core dm of the profile");
+            }
             AddNumber(table, BodyNames.ProfileRotationalEnergy, budget.ProfileRotational, EnergyDimension, "1/2 int Omega^2 varpi^2 dm of the profile");
         }
         return new BodyReport(thermoSection, resolutionSection, energySection);

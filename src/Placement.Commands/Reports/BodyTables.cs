@@ -40,7 +40,9 @@ internal static class BodyTables
         {
             var table = new Table().Title(Markup.Escape($"energy budget [{e.EnergyUnit}], gravity by {(e.OpeningAngle == 0 ? "pairwise sum" : $"octree, theta = {e.OpeningAngle:G3}")}"))
                 .AddColumns("energy", "points", "profile", "points/profile - 1");
-            table.AddRow("gravitational W", E(e.Points.Gravitational), E(e.Profile.Gravitational), Percent(e.GravitationalDeviation));
+            table.AddRow("gravitational W", E(e.Points.Gravitational), E(e.Profile.Gravitational), Percent((e.Points.Gravitational) / e.Profile.Gravitational - 1));
+            if (e.Profile.CorePotential != 0)
+                table.AddRow("in the core's field W_c", E(e.Points.CorePotential), E(e.Profile.CorePotential), Percent(e.Points.CorePotential / e.Profile.CorePotential - 1));
             table.AddRow("thermal U", E(e.Points.Thermal), E(e.Profile.Thermal), Percent(e.ThermalDeviation));
             table.AddRow("kinetic K / rotational T", E(e.Points.Kinetic), E(e.Profile.Kinetic), Percent(e.KineticDeviation));
             table.AddRow("total", E(e.Points.Total), E(e.Profile.Total), "");

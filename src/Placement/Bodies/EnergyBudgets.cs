@@ -8,11 +8,16 @@ namespace Placement.Bodies;
 /// <remarks>
 /// Points: W by the octree (<see cref="GravitationalEnergy.OfPointsByTree"/>) or, for θ = 0, the exact pairwise sum;
 /// U = Σ m u; K = ½ Σ m v². Profile: W = −G ∫ M dM / r, U = ∫ u dm (<see cref="ThermalEnergy"/>),
-/// T = ½ ∫ Ω² ϖ² dm (<see cref="KineticEnergy.OfRotatingProfile"/>). Only the gas points are counted; point masses
-/// travelling with a table (a softened core, companions) are not part of these sums.
+/// T = ½ ∫ Ω² ϖ² dm (<see cref="KineticEnergy.OfRotatingProfile"/>). The gas points are counted, plus, when the profile
+/// has a softened central core (<see cref="IRadialProfile.CentralPointMass"/>, at the origin of the points' frame), the
+/// gas's potential energy and Clausius virial in the core's field (<see cref="EnergyBudget"/>); companions travelling
+/// with a table are not part of these sums.
 /// </remarks>
 public static class EnergyBudgets
 {
+    /// <summary>Mass-coordinate panels of the core terms (the same resolution as <see cref="GravitationalEnergy.OfProfile"/>).</summary>
+    private const int CorePanels = 2000;
+
     /// <summary>Energies of the points and of the profile.</summary>
     /// <param name="points">The placed points.</param>
     /// <param name="profile">Their target profile, in the same units.</param>
@@ -38,7 +43,20 @@ public static class EnergyBudgets
         double k = velocity is { } v ? KineticEnergy.OfPoints(points, v.X, v.Y, v.Z) : double.NaN;
         double profileU = o.Thermodynamics is null ? double.NaN : ThermalEnergy.OfProfile(profile, o.Thermodynamics);
         double profileT = o.AngularVelocity is null ? double.NaN : KineticEnergy.OfRotatingProfile(profile, o.AngularVelocity);
+        double pointsCore = 0, pointsCoreVirial = 0, profileCore = 0, profileCoreVirial = 0;
+        if (profile.CentralPointMass is { } core)
+        {
+            double g = profile.Units.GravitationalConstant, h = core.SofteningLength;
+            for (int i = 0; i < points.Count; i++)
+            {
+                double r = points.Radius(i);
+                pointsCore += points.Mass[i] * SplineSoftening.Potential(r, core.Mass, h, g);
+                pointsCoreVirial += points.Mass[i] * r * SplineSoftening.RadialAcceleration(r, core.Mass, h, g);
+            }
+            profileCore = MassCoordinateQuadrature.Integrate(profile, (_, r) => SplineSoftening.Potential(r, core.Mass, h, g), CorePanels);
+            profileCoreVirial = MassCoordinateQuadrature.Integrate(profile, (_, r) => r * SplineSoftening.RadialAcceleration(r, core.Mass, h, g), CorePanels);
+        }
         return new EnergyBudget(points.Units, o.Thermodynamics?.Gamma ?? 5.0 / 3.0, o.OpeningAngle, w, u, k,
-            GravitationalEnergy.OfProfile(profile), profileU, profileT);
+            GravitationalEnergy.OfProfile(profile), profileU, profileT, pointsCore, profileCore, pointsCoreVirial, profileCoreVirial);
     }
 }

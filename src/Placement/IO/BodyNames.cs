@@ -48,6 +48,12 @@ public static class BodyNames
     /// <summary>Rotational energy ½ ∫ Ω² ϖ² dm of the profile (energy).</summary>
     public const string ProfileRotationalEnergy = "profile_rotational_energy";
 
+    /// <summary>Potential energy Σ m Φ_core of the points in a softened central core's field (energy); only with a core.</summary>
+    public const string PointsCorePotentialEnergy = "points_core_potential_energy";
+
+    /// <summary>Potential energy ∫ Φ_core dm of the profile's gas in its softened central core's field (energy); only with a core.</summary>
+    public const string ProfileCorePotentialEnergy = "profile_core_potential_energy";
+
     /// <summary>Opening angle θ of the tree gravity, 0 for the exact sum (scalar, 1).</summary>
     public const string OpeningAngle = "tree_opening_angle";
 

@@ -68,6 +68,9 @@ public sealed class CoreReplacedProfile : IRadialProfile
     public PointMass? Core { get; }
 
     /// <inheritdoc />
+    public PointMass? CentralPointMass => Core;
+
+    /// <inheritdoc />
     public UnitSystem Units => _original.Units;
 
     /// <inheritdoc />

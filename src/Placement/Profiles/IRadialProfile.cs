@@ -50,6 +50,20 @@ public interface IRadialProfile
         return false;
     }
 
+    /// <summary>
+    /// A softened point mass at the centre that the gas stands beside (the core left by core replacement), in this
+    /// profile's units; null by default. It is not part of <see cref="TotalMass"/>.
+    /// </summary>
+    Bodies.PointMass? CentralPointMass => null;
+
+    /// <summary>
+    /// Mass whose gravity acts at radius r (mass units): M(r) plus the share of <see cref="CentralPointMass"/> inside r
+    /// for its softening kernel (<see cref="Bodies.SplineSoftening.EnclosedMass"/>), so g = G·GravitatingMass(r)/r².
+    /// </summary>
+    /// <param name="r">Radius, length units.</param>
+    double GravitatingMass(double r) =>
+        EnclosedMass(r) + (CentralPointMass is { } c ? Bodies.SplineSoftening.EnclosedMass(r, c.Mass, c.SofteningLength) : 0);
+
     /// <summary>Batch form of <see cref="Density(double)"/>; implementations may override for speed.</summary>
     void Density(ReadOnlySpan<double> r, Span<double> rho)
     {

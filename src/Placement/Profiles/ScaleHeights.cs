@@ -4,7 +4,7 @@ namespace Placement.Profiles;
 
 /// <summary>Pressure scale heights of a profile and the number of equal-mass points needed to resolve them.</summary>
 /// <remarks>
-/// <para>H_P(r) = P / (ρ g) with g = G M(r) / r² (hydrostatic definition; G from the profile's unit system). The
+/// <para>H_P(r) = P / (ρ g) with g = G M_grav(r) / r², M_grav = <see cref="IRadialProfile.GravitatingMass"/> (gas plus any softened central core) (hydrostatic definition; G from the profile's unit system). The
 /// pressure is the profile's first carried quantity whose unit has the dimension of pressure (mass length⁻¹ time⁻²),
 /// e.g. <c>P</c> of a polytrope or a table column in dyn/cm².</para>
 /// <para>Resolution: N equal-mass points give a local spacing Δ(r) = (M / (N ρ(r)))^(1/3), so k cells per scale height
@@ -79,7 +79,7 @@ public static partial class ScaleHeights
         if (!(r > 0)) return double.NaN;
         double rho = profile.Density(r);
         if (!(rho > 0) || !profile.TryQuantity(name, r, out double p) || !(p > 0)) return double.NaN;
-        double gravity = g * profile.EnclosedMass(r) / (r * r);
+        double gravity = g * profile.GravitatingMass(r) / (r * r); // a softened core's gravity counts too
         return p / (rho * gravity);
     }
 }
