@@ -71,6 +71,7 @@ internal static class InspectCommand
                     summary.MinPositiveDensity, summary.DensityContrast, summary.Radius10, summary.HalfMassRadius, summary.Radius90,
                     summary.QuantityNames, summary.Fingerprint,
                     bindingEnergy = Bodies.GravitationalEnergy.OfProfile(body),
+                    corePotentialEnergy = Bodies.GravitationalEnergy.OfProfileInCentralField(body),
                     virialRatio = resolution is null ? double.NaN : Bodies.ThermalEnergy.VirialRatio(body),
                     gamma = g,
                     thermalEnergy = budget.IdealGas,
@@ -93,10 +94,13 @@ internal static class InspectCommand
             double binding = Bodies.GravitationalEnergy.OfProfile(body);
             context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"binding energy   W = {binding:G6} {body.Units.MassUnitName} {body.Units.LengthUnitName}^2/{body.Units.TimeUnitName}^2 (-G ∫ M dM / r)"));
+            if (body.CentralPointMass is not null)
+                context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"in core's field  W_c = {Bodies.GravitationalEnergy.OfProfileInCentralField(body):G6} (∫ Φ_core dm; the virial ratio counts the core's force)"));
             foreach (string line in budget.Lines(body.Units)) context.Output.WriteLine(line);
             if (resolution is not null)
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"virial ratio     3∫P dV / -W = {Bodies.ThermalEnergy.VirialRatio(body):F6} (1 in hydrostatic equilibrium)"));
+                    $"virial ratio     3∫P dV / -(W + V_core) = {Bodies.ThermalEnergy.VirialRatio(body):F6} (1 in hydrostatic equilibrium)"));
             if (resolution is null)
             {
                 context.Output.WriteLine("pressure         not carried: no scale heights");

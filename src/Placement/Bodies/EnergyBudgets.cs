@@ -15,8 +15,6 @@ namespace Placement.Bodies;
 /// </remarks>
 public static class EnergyBudgets
 {
-    /// <summary>Mass-coordinate panels of the core terms (the same resolution as <see cref="GravitationalEnergy.OfProfile"/>).</summary>
-    private const int CorePanels = 2000;
 
     /// <summary>Energies of the points and of the profile.</summary>
     /// <param name="points">The placed points.</param>
@@ -53,8 +51,8 @@ public static class EnergyBudgets
                 pointsCore += points.Mass[i] * SplineSoftening.Potential(r, core.Mass, h, g);
                 pointsCoreVirial += points.Mass[i] * r * SplineSoftening.RadialAcceleration(r, core.Mass, h, g);
             }
-            profileCore = MassCoordinateQuadrature.Integrate(profile, (_, r) => SplineSoftening.Potential(r, core.Mass, h, g), CorePanels);
-            profileCoreVirial = MassCoordinateQuadrature.Integrate(profile, (_, r) => r * SplineSoftening.RadialAcceleration(r, core.Mass, h, g), CorePanels);
+            profileCore = GravitationalEnergy.OfProfileInCentralField(profile);
+            profileCoreVirial = GravitationalEnergy.VirialOfCentralField(profile);
         }
         return new EnergyBudget(points.Units, o.Thermodynamics?.Gamma ?? 5.0 / 3.0, o.OpeningAngle, w, u, k,
             GravitationalEnergy.OfProfile(profile), profileU, profileT, pointsCore, profileCore, pointsCoreVirial, profileCoreVirial);

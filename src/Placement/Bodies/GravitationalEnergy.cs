@@ -95,4 +95,30 @@ public static class GravitationalEnergy
         double w = MassCoordinateQuadrature.Integrate(profile, (m, r) => m / r, panels);
         return -profile.Units.GravitationalConstant * w;
     }
+
+    /// <summary>
+    /// W_c = ∫ Φ_c dm: potential energy of the profile's gas in the field of its softened central core
+    /// (<see cref="IRadialProfile.CentralPointMass"/>, potential <see cref="SplineSoftening.Potential"/>), in
+    /// mass·length²/time²; 0 without a core.
+    /// </summary>
+    public static double OfProfileInCentralField(IRadialProfile profile, int panels = 2000)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        if (profile.CentralPointMass is not { } core) return 0;
+        double g = profile.Units.GravitationalConstant;
+        return MassCoordinateQuadrature.Integrate(profile, (_, r) => SplineSoftening.Potential(r, core.Mass, core.SofteningLength, g), panels);
+    }
+
+    /// <summary>
+    /// V_c = ∫ r·a_c dm = −G m_c ∫ g(r/h)/r dm: the Clausius virial of the central core's force on the profile's gas, which
+    /// enters the virial theorem 3∫P dV = −(W + V_c) of gas in equilibrium in its own and the core's gravity; in
+    /// mass·length²/time², 0 without a core.
+    /// </summary>
+    public static double VirialOfCentralField(IRadialProfile profile, int panels = 2000)
+    {
+        ArgumentNullException.ThrowIfNull(profile);
+        if (profile.CentralPointMass is not { } core) return 0;
+        double g = profile.Units.GravitationalConstant;
+        return MassCoordinateQuadrature.Integrate(profile, (_, r) => r * SplineSoftening.RadialAcceleration(r, core.Mass, core.SofteningLength, g), panels);
+    }
 }

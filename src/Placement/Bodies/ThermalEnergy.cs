@@ -59,6 +59,7 @@ public static class ThermalEnergy
         return sum;
     }
 
-    /// <summary>3∫P dV / (−W): 1 for a profile in hydrostatic equilibrium (virial theorem).</summary>
-    public static double VirialRatio(IRadialProfile profile) => 2 * OfProfile(profile, 5.0 / 3.0) / -GravitationalEnergy.OfProfile(profile);
+    /// <summary>3∫P dV / (−(W + V_c)): 1 for a profile in hydrostatic equilibrium (virial theorem; V_c is the Clausius term of a softened central core, <see cref="GravitationalEnergy.VirialOfCentralField"/>, 0 without one).</summary>
+    public static double VirialRatio(IRadialProfile profile) =>
+        2 * OfProfile(profile, 5.0 / 3.0) / -(GravitationalEnergy.OfProfile(profile) + GravitationalEnergy.VirialOfCentralField(profile));
 }
