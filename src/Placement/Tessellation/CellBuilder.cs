@@ -81,7 +81,7 @@ internal sealed class CellBuilder
         _first = true;
         if (_search is not null) ClipByTree(self, gx, gy, gz);
         else ClipByGrid(slot, self, gx, gy, gz);
-        if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz);
+        if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
         cell.BuildFaceRings();
         Measure(self, gx, gy, gz, faces);
     }
@@ -96,6 +96,7 @@ internal sealed class CellBuilder
         double outer = _lastSecurity > 0 ? _lastSecurity : 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
         var buffer = _buffer;
         var index = _index;
+        bool preclipped = false;
         while (true)
         {
             double outer2 = outer * outer;
@@ -111,6 +112,12 @@ internal sealed class CellBuilder
                 ClipBy(bx[q], by[q], bz[q], d2, self, index[slotOf[q]], gx, gy, gz);
             }
             double security2 = 4.0 * cell.MaxRadiusSquared;
+            if (security2 > outer2 && _domain.Kind == DomainKind.Sphere && !preclipped)
+            {
+                PreclipToSphere(gx, gy, gz);
+                preclipped = true;
+                security2 = 4.0 * cell.MaxRadiusSquared;
+            }
             if (security2 <= outer2 || (!g.Periodic && outer2 > _diagonal2)) break;
             inner2 = outer2;
             // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
@@ -126,8 +133,30 @@ internal sealed class CellBuilder
         var search = _search!;
         var cell = _cell;
         search.Start(gx, gy, gz, self);
+        int used = 0;
         while (search.Next(4.0 * cell.MaxRadiusSquared, out var hit))
+        {
             ClipBy(hit.Dx, hit.Dy, hit.Dz, hit.DistanceSquared, self, _index[hit.Slot], gx, gy, gz);
+            if (++used == PreclipAfter && _domain.Kind == DomainKind.Sphere) PreclipToSphere(gx, gy, gz);
+        }
+    }
+
+    // Neighbours used before a ball's cell is checked for a pre-clip (a typical finished cell has about 16 faces).
+    private const int PreclipAfter = 32;
+
+    // Relative excess radius of the coarse tangent-plane pre-clip.
+    private const double PreclipTolerance = 0.02;
+
+    /// <summary>
+    /// In a ball, a cell still unfinished after its first neighbours usually reaches out of the ball (a surface cell
+    /// of a steep envelope, or one next to the empty corners of the bounding cube); its security radius would then
+    /// sweep much of the body. Tangent planes to within R(1 + 0.02) bound it first; they are planes the final
+    /// tangent-plane pass could have added (each is tangent to the ball), so the cell still contains its part of the
+    /// ball and ends within R(1 + δ).
+    /// </summary>
+    private void PreclipToSphere(double gx, double gy, double gz)
+    {
+        if (PreclipTolerance > _options.SphereTolerance) ClipToSphere(gx, gy, gz, PreclipTolerance);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -171,11 +200,11 @@ internal sealed class CellBuilder
         return _order.AsSpan(0, n);
     }
 
-    private void ClipToSphere(double gx, double gy, double gz)
+    private void ClipToSphere(double gx, double gy, double gz, double tolerance)
     {
         var d = _domain;
         var cell = _cell;
-        double r = d.Radius, limit2 = r * r * (1 + _options.SphereTolerance) * (1 + _options.SphereTolerance);
+        double r = d.Radius, limit2 = r * r * (1 + tolerance) * (1 + tolerance);
         double ox = gx - d.CenterX, oy = gy - d.CenterY, oz = gz - d.CenterZ;
         for (int iteration = 0; iteration < 100_000; iteration++)
         {
