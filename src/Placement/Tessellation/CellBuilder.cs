@@ -13,7 +13,8 @@ internal sealed class CellBuilder
     private static readonly int[] SphereCodes = [CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface];
 
     private readonly PointGrid? _grid;
-    private readonly KdTreeSearch? _search;
+    private readonly KdTree? _tree;
+    private readonly double _firstRadius;
     private readonly double[] _px, _py, _pz;
     private readonly int[] _index;
     private readonly TessellationDomain _domain;
@@ -33,17 +34,19 @@ internal sealed class CellBuilder
     public CellBuilder(PointGrid? grid, KdTree? tree, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
     {
         _grid = grid;
+        _tree = tree;
+        double lx = domain.MaxX - domain.MinX, ly = domain.MaxY - domain.MinY, lz = domain.MaxZ - domain.MinZ;
+        _diagonal2 = lx * lx + ly * ly + lz * lz;
         if (tree is not null)
         {
-            _search = tree.CreateSearch();
             _px = tree.SortedX; _py = tree.SortedY; _pz = tree.SortedZ; _index = tree.SortedIndex;
-            _diagonal2 = 0;
+            _firstRadius = 2.5 * spacing;
         }
         else
         {
             var g = grid ?? throw new ArgumentNullException(nameof(grid));
             _px = g.SortedX; _py = g.SortedY; _pz = g.SortedZ; _index = g.SortedIndex;
-            _diagonal2 = g.LengthX * g.LengthX + g.LengthY * g.LengthY + g.LengthZ * g.LengthZ;
+            _firstRadius = 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
         }
         _domain = domain;
         _options = options;
@@ -79,21 +82,20 @@ internal sealed class CellBuilder
         }
         cell.Tolerance = _options.ClipTolerance * Math.Sqrt(cell.MaxRadiusSquared);
         _first = true;
-        if (_search is not null) ClipByTree(self, gx, gy, gz);
-        else ClipByGrid(slot, self, gx, gy, gz);
+        ClipByShells(slot, self, gx, gy, gz);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
         cell.BuildFaceRings();
         Measure(self, gx, gy, gz, faces);
     }
 
-    // Neighbours from the uniform grid in growing shells [r0, r1): the first radius follows the previous cell's
+    // Neighbours from the grid or the tree in growing shells [r0, r1): the first radius follows the previous cell's
     // security radius (consecutive cells are neighbours in space, so of similar size), later ones the current cell's.
-    private void ClipByGrid(int slot, int self, double gx, double gy, double gz)
+    private void ClipByShells(int slot, int self, double gx, double gy, double gz)
     {
-        var g = _grid!;
+        var g = _grid;
         var cell = _cell;
         double inner2 = 0;
-        double outer = _lastSecurity > 0 ? _lastSecurity : 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
+        double outer = _lastSecurity > 0 ? _lastSecurity : _firstRadius;
         var buffer = _buffer;
         var index = _index;
         bool preclipped = false;
@@ -101,7 +103,8 @@ internal sealed class CellBuilder
         {
             double outer2 = outer * outer;
             buffer.Clear();
-            g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            else _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
             var order = NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
@@ -118,31 +121,13 @@ internal sealed class CellBuilder
                 preclipped = true;
                 security2 = 4.0 * cell.MaxRadiusSquared;
             }
-            if (security2 <= outer2 || (!g.Periodic && outer2 > _diagonal2)) break;
+            if (security2 <= outer2 || (_domain.Kind != DomainKind.PeriodicBox && outer2 > _diagonal2)) break;
             inner2 = outer2;
             // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
             outer = Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
         }
         _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
     }
-
-    // Neighbours from the k-d tree in exact nearest-first order, each fetched only while it lies inside the current
-    // security radius: the cost follows the cell's own neighbourhood however crowded the region is.
-    private void ClipByTree(int self, double gx, double gy, double gz)
-    {
-        var search = _search!;
-        var cell = _cell;
-        search.Start(gx, gy, gz, self);
-        int used = 0;
-        while (search.Next(4.0 * cell.MaxRadiusSquared, out var hit))
-        {
-            ClipBy(hit.Dx, hit.Dy, hit.Dz, hit.DistanceSquared, self, _index[hit.Slot], gx, gy, gz);
-            if (++used == PreclipAfter && _domain.Kind == DomainKind.Sphere) PreclipToSphere(gx, gy, gz);
-        }
-    }
-
-    // Neighbours used before a ball's cell is checked for a pre-clip (a typical finished cell has about 16 faces).
-    private const int PreclipAfter = 32;
 
     // Relative excess radius of the coarse tangent-plane pre-clip.
     private const double PreclipTolerance = 0.02;

@@ -46,7 +46,12 @@ public class NeighbourIndexTests
     {
         var (x, y, z) = Cusp(12000, 9, 20);
         var domain = TessellationDomain.Sphere(0, 0, 0, 20);
-        var one = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions { NeighbourIndex = NeighbourIndexKind.KdTree, Parallel = ParallelSettings.Sequential });
+        // Chunk boundaries (which depend on the minimum chunk, never on the thread count) are the same in both runs.
+        var one = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions
+        {
+            NeighbourIndex = NeighbourIndexKind.KdTree,
+            Parallel = new ParallelSettings { MaxDegreeOfParallelism = 1, MinimumChunk = 1000 },
+        });
         var two = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions
         {
             NeighbourIndex = NeighbourIndexKind.KdTree,
@@ -55,6 +60,29 @@ public class NeighbourIndexTests
         Assert.Equal(one.Volume, two.Volume);
         Assert.Equal(one.FaceCount, two.FaceCount);
         one.CheckValidity(x, y, z, 1e-12);
+    }
+
+    [Fact]
+    public void KdTreeShells_GatherEachPointOnce_LikeBruteForce()
+    {
+        var (x, y, z) = Cusp(3000, 13, 10);
+        var tree = new Placement.Spatial.KdTree(x, y, z);
+        var buffer = new Placement.Spatial.NeighbourBuffer();
+        for (int s = 0; s < 200; s += 7)
+        {
+            double qx = tree.SortedX[s], qy = tree.SortedY[s], qz = tree.SortedZ[s];
+            var seen = new int[x.Length];
+            double[] radii = [0, 0.05, 0.3, 1.5, 40];
+            for (int k = 0; k + 1 < radii.Length; k++)
+            {
+                buffer.Clear();
+                tree.CollectInShell(qx, qy, qz, radii[k] * radii[k], radii[k + 1] * radii[k + 1], s, buffer);
+                foreach (int slot in buffer.Slot) seen[tree.SortedIndex[slot]]++;
+            }
+            // Brute force: every other point lies within 40 of the query (the set spans radius 10) and is seen once.
+            for (int j = 0; j < x.Length; j++)
+                Assert.Equal(j == tree.SortedIndex[s] ? 0 : 1, seen[j]);
+        }
     }
 
     // Points with enclosed mass M(<r) ∝ r²/(r + 1)² inside radius rMax (inverse transform), random directions.
