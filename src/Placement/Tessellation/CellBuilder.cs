@@ -55,6 +55,14 @@ internal sealed class CellBuilder
         _duplicate2 = dup * dup;
     }
 
+    /// <summary>Restarts the per-chunk state: the first shell radius guess and the plane counters.</summary>
+    public void BeginChunk()
+    {
+        _lastSecurity = 0;
+        PlanesTested = 0;
+        PlanesCut = 0;
+    }
+
     public long PlanesTested { get; private set; }
 
     public long PlanesCut { get; private set; }

@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Runtime.ExceptionServices;
 using Placement.Parallelism;
 using Placement.Spatial;
@@ -102,14 +103,21 @@ public sealed class VoronoiTessellator
         var index = tree is null ? grid.SortedIndex : tree.SortedIndex;
         try
         {
+            // Workers (with scratch grown to the largest cells seen) are pooled across chunks rather than made per
+            // chunk: crowded sets grow neighbour buffers to many thousands of entries. Each chunk restarts the worker's
+            // state, so results do not depend on which worker ran which chunk.
+            var pool = new ConcurrentBag<CellBuilder>();
             ParallelLoop.For(n, loopSettings, (start, end) =>
             {
-                var worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing) : new CellBuilder(null, tree, domain, options, cells, spacing);
+                if (!pool.TryTake(out var worker))
+                    worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing) : new CellBuilder(null, tree, domain, options, cells, spacing);
+                worker.BeginChunk();
                 FaceBuffer? faces = chunkFaces is null ? null : new FaceBuffer();
                 for (int k = start; k < end; k++) worker.Build(order[k], faces);
                 if (chunkFaces is not null) chunkFaces[start / chunk] = faces!;
                 Interlocked.Add(ref tested, worker.PlanesTested);
                 Interlocked.Add(ref cut, worker.PlanesCut);
+                pool.Add(worker);
             });
         }
         catch (AggregateException ae) when (ae.InnerExceptions.Count > 0)
