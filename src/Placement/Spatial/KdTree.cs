@@ -88,6 +88,55 @@ public sealed class KdTree
     internal int[] Left { get; }
     internal int[] Right { get; }
 
+    /// <summary>
+    /// Appends to <paramref name="buffer"/> every point whose squared distance d² from (x, y, z) satisfies
+    /// <paramref name="innerSquared"/> ≤ d² &lt; <paramref name="outerSquared"/>, unsorted, except sorted slot
+    /// <paramref name="excludeSlot"/>; returns how many were added. Calling it with growing shells [r₀, r₁), [r₁, r₂), …
+    /// gathers each point exactly once.
+    /// </summary>
+    /// <remarks>
+    /// Depth-first over the nodes whose box meets the shell (nearest box distance below the outer radius, farthest
+    /// corner at or beyond the inner one); a leaf's points are one contiguous branch-free scan. Cost: the leaves
+    /// meeting the shell, whatever the density contrast of the set.
+    /// </remarks>
+    /// <param name="x">Query x, length units.</param>
+    /// <param name="y">Query y.</param>
+    /// <param name="z">Query z.</param>
+    /// <param name="innerSquared">Inclusive lower limit on d², length².</param>
+    /// <param name="outerSquared">Exclusive upper limit on d², length².</param>
+    /// <param name="excludeSlot">Sorted slot (not original index) to skip, or −1.</param>
+    /// <param name="buffer">Receives the neighbours (not cleared); its slots are this tree's sorted slots.</param>
+    /// <exception cref="ArgumentNullException"><paramref name="buffer"/> is null.</exception>
+    public int CollectInShell(double x, double y, double z, double innerSquared, double outerSquared, int excludeSlot, NeighbourBuffer buffer)
+    {
+        ArgumentNullException.ThrowIfNull(buffer);
+        if (!(outerSquared > innerSquared) || NodeCount == 0) return 0;
+        int before = buffer.Count;
+        // Median splits halve the points at every level, so the depth is at most log2(N) + 1 and the stack 2 per level.
+        Span<int> stack = stackalloc int[128];
+        int top = 0;
+        stack[top++] = 0;
+        while (top > 0)
+        {
+            int node = stack[--top];
+            double nx = Near(x, BoxMinX[node], BoxMaxX[node]), ny = Near(y, BoxMinY[node], BoxMaxY[node]), nz = Near(z, BoxMinZ[node], BoxMaxZ[node]);
+            if (nx * nx + ny * ny + nz * nz >= outerSquared) continue;
+            double fx = Math.Max(x - BoxMinX[node], BoxMaxX[node] - x), fy = Math.Max(y - BoxMinY[node], BoxMaxY[node] - y), fz = Math.Max(z - BoxMinZ[node], BoxMaxZ[node] - z);
+            if (fx * fx + fy * fy + fz * fz < innerSquared) continue;
+            int left = Left[node];
+            if (left < 0)
+            {
+                buffer.AppendRange(SortedX, SortedY, SortedZ, NodeStart[node], NodeEnd[node], -x, -y, -z, innerSquared, outerSquared, excludeSlot);
+                continue;
+            }
+            stack[top++] = Right[node];
+            stack[top++] = left;
+        }
+        return buffer.Count - before;
+    }
+
+    private static double Near(double q, double lo, double hi) => q < lo ? lo - q : q > hi ? q - hi : 0.0;
+
     /// <summary>A reusable query over this tree (one per thread).</summary>
     public KdTreeSearch CreateSearch() => new(this);
 

@@ -70,19 +70,21 @@ public sealed class NeighbourBuffer
     }
 
     /// <summary>
-    /// Appends, without branches, the points of sorted slots [from, to) of <paramref name="grid"/> shifted by
-    /// (ox, oy, oz) (query subtracted) whose squared distance lies in [inner², outer²), except slot <paramref name="skip"/>.
+    /// Appends, without branches, the points of slots [from, to) of the coordinate arrays (a grid's or a tree's sorted
+    /// copy) shifted by (ox, oy, oz) (query subtracted) whose squared distance lies in [inner², outer²), except slot
+    /// <paramref name="skip"/>.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal void AppendRange(PointGrid grid, int from, int to, double ox, double oy, double oz, double inner2, double outer2, int skip)
+    internal void AppendRange(double[] xs, double[] ys, double[] zs, int from, int to, double ox, double oy, double oz, double inner2, double outer2, int skip)
     {
         if (from >= to) return;
         int need = Count + (to - from);
         while (need > _slot.Length) Grow();
-        if ((uint)to > (uint)grid.SortedX.Length || from < 0) throw new InvalidOperationException("Grid slot range out of bounds.");
-        ref double px = ref MemoryMarshal.GetArrayDataReference(grid.SortedX);
-        ref double py = ref MemoryMarshal.GetArrayDataReference(grid.SortedY);
-        ref double pz = ref MemoryMarshal.GetArrayDataReference(grid.SortedZ);
+        if ((uint)to > (uint)xs.Length || (uint)to > (uint)ys.Length || (uint)to > (uint)zs.Length || from < 0)
+            throw new InvalidOperationException("Slot range out of bounds.");
+        ref double px = ref MemoryMarshal.GetArrayDataReference(xs);
+        ref double py = ref MemoryMarshal.GetArrayDataReference(ys);
+        ref double pz = ref MemoryMarshal.GetArrayDataReference(zs);
         ref int slot = ref MemoryMarshal.GetArrayDataReference(_slot);
         ref double d2s = ref MemoryMarshal.GetArrayDataReference(_d2);
         ref double dxs = ref MemoryMarshal.GetArrayDataReference(_dx);

@@ -315,7 +315,7 @@ public sealed class PointGrid
                 if (!Periodic)
                 {
                     xLo = Math.Max(xLo, 0); xHi = Math.Min(xHi, CountX - 1);
-                    buffer.AppendRange(this, CellStart[rowBase + xLo], CellStart[rowBase + xHi + 1], -x, sy, sz, innerSquared, outerSquared, excludeSlot);
+                    buffer.AppendRange(SortedX, SortedY, SortedZ, CellStart[rowBase + xLo], CellStart[rowBase + xHi + 1], -x, sy, sz, innerSquared, outerSquared, excludeSlot);
                     continue;
                 }
                 // Periodic rows may wrap, possibly several times for small grids: one contiguous run per period.
@@ -326,7 +326,7 @@ public sealed class PointGrid
                     int runEnd = Math.Min(xHi, (wx + 1) * CountX - 1);
                     int rxEnd = runEnd - wx * CountX;
                     bool zero = wx == 0 && wy == 0 && wz == 0;
-                    buffer.AppendRange(this, CellStart[rowBase + rx], CellStart[rowBase + rxEnd + 1], wx * LengthX - x, sy, sz, innerSquared, outerSquared, zero ? excludeSlot : -1);
+                    buffer.AppendRange(SortedX, SortedY, SortedZ, CellStart[rowBase + rx], CellStart[rowBase + rxEnd + 1], wx * LengthX - x, sy, sz, innerSquared, outerSquared, zero ? excludeSlot : -1);
                     cx = runEnd + 1;
                 }
             }

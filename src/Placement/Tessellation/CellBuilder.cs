@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Placement.Spatial;
 
 namespace Placement.Tessellation;
@@ -11,7 +12,11 @@ internal sealed class CellBuilder
     private static readonly int[] BoxCodes = [CellFaceCodes.WallMinX, CellFaceCodes.WallMaxX, CellFaceCodes.WallMinY, CellFaceCodes.WallMaxY, CellFaceCodes.WallMinZ, CellFaceCodes.WallMaxZ];
     private static readonly int[] SphereCodes = [CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface, CellFaceCodes.SphereSurface];
 
-    private readonly PointGrid _grid;
+    private readonly PointGrid? _grid;
+    private readonly KdTree? _tree;
+    private readonly double _firstRadius;
+    private readonly double[] _px, _py, _pz;
+    private readonly int[] _index;
     private readonly TessellationDomain _domain;
     private readonly TessellationOptions _options;
     private readonly VoronoiCells _cells;
@@ -25,31 +30,55 @@ internal sealed class CellBuilder
     private readonly int[] _selfCodes = new int[6];
     private double[] _faceArea = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
 
-    public CellBuilder(PointGrid grid, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
+    /// <summary>A builder over a uniform grid (<paramref name="tree"/> null) or over a k-d tree (<paramref name="grid"/> null).</summary>
+    public CellBuilder(PointGrid? grid, KdTree? tree, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
     {
         _grid = grid;
+        _tree = tree;
+        double lx = domain.MaxX - domain.MinX, ly = domain.MaxY - domain.MinY, lz = domain.MaxZ - domain.MinZ;
+        _diagonal2 = lx * lx + ly * ly + lz * lz;
+        if (tree is not null)
+        {
+            _px = tree.SortedX; _py = tree.SortedY; _pz = tree.SortedZ; _index = tree.SortedIndex;
+            _firstRadius = 2.5 * spacing;
+        }
+        else
+        {
+            var g = grid ?? throw new ArgumentNullException(nameof(grid));
+            _px = g.SortedX; _py = g.SortedY; _pz = g.SortedZ; _index = g.SortedIndex;
+            _firstRadius = 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
+        }
         _domain = domain;
         _options = options;
         _cells = cells;
-        _diagonal2 = grid.LengthX * grid.LengthX + grid.LengthY * grid.LengthY + grid.LengthZ * grid.LengthZ;
         double dup = options.DuplicateTolerance * spacing;
         _duplicate2 = dup * dup;
+    }
+
+    /// <summary>Restarts the per-chunk state: the first shell radius guess and the plane counters.</summary>
+    public void BeginChunk()
+    {
+        _lastSecurity = 0;
+        PlanesTested = 0;
+        PlanesCut = 0;
     }
 
     public long PlanesTested { get; private set; }
 
     public long PlanesCut { get; private set; }
 
+    private bool _first;
+
     public void Build(int slot, FaceBuffer? faces)
     {
-        var g = _grid;
-        int self = g.SortedIndex[slot];
-        double gx = g.SortedX[slot], gy = g.SortedY[slot], gz = g.SortedZ[slot];
+        int self = _index[slot];
+        double gx = _px[slot], gy = _py[slot], gz = _pz[slot];
         var d = _domain;
         var cell = _cell;
         if (d.Kind == DomainKind.PeriodicBox)
         {
             // The cell lies within half a period of its generator: the bisectors with its own images.
+            var g = _grid!;
             Array.Fill(_selfCodes, self);
             double hx = 0.5 * g.LengthX, hy = 0.5 * g.LengthY, hz = 0.5 * g.LengthZ;
             cell.InitBox(-hx, -hy, -hz, hx, hy, hz, _selfCodes);
@@ -60,18 +89,30 @@ internal sealed class CellBuilder
                 d.Kind == DomainKind.Sphere ? SphereCodes : BoxCodes);
         }
         cell.Tolerance = _options.ClipTolerance * Math.Sqrt(cell.MaxRadiusSquared);
-        // Gather neighbours in growing shells [r0, r1): the first radius follows the previous cell's security
-        // radius (consecutive cells are neighbours in space, so of similar size), later ones the current cell's.
+        _first = true;
+        ClipByShells(slot, self, gx, gy, gz);
+        if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
+        cell.BuildFaceRings();
+        Measure(self, gx, gy, gz, faces);
+    }
+
+    // Neighbours from the grid or the tree in growing shells [r0, r1): the first radius follows the previous cell's
+    // security radius (consecutive cells are neighbours in space, so of similar size), later ones the current cell's.
+    private void ClipByShells(int slot, int self, double gx, double gy, double gz)
+    {
+        var g = _grid;
+        var cell = _cell;
         double inner2 = 0;
-        double outer = _lastSecurity > 0 ? _lastSecurity : 1.3 * Math.Max(g.CellSizeX, Math.Max(g.CellSizeY, g.CellSizeZ));
-        bool first = true;
-        long tested = 0, cutCount = 0;
+        double outer = _lastSecurity > 0 ? _lastSecurity : _firstRadius;
         var buffer = _buffer;
+        var index = _index;
+        bool preclipped = false;
         while (true)
         {
             double outer2 = outer * outer;
             buffer.Clear();
-            g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            else _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
             var order = NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
@@ -79,32 +120,55 @@ internal sealed class CellBuilder
                 int q = order[k];
                 double d2 = dist2[q];
                 if (d2 >= 4.0 * cell.MaxRadiusSquared) continue;
-                int other = g.SortedIndex[slotOf[q]];
-                if (d2 <= _duplicate2)
-                    throw new ArgumentException(
-                        $"Points {Math.Min(self, other)} and {Math.Max(self, other)} coincide (distance {Math.Sqrt(d2)} at ({gx}, {gy}, {gz})); a Voronoi tessellation needs distinct generators: remove or merge duplicates first.");
-                if (first)
-                {
-                    // Tolerance from the first (near-nearest) neighbour: rounding scales with the cell size.
-                    cell.Tolerance = _options.ClipTolerance * Math.Sqrt(d2);
-                    first = false;
-                }
-                tested++;
-                if (cell.Clip(bx[q], by[q], bz[q], 0.5 * d2, other)) cutCount++;
+                ClipBy(bx[q], by[q], bz[q], d2, self, index[slotOf[q]], gx, gy, gz);
             }
             double security2 = 4.0 * cell.MaxRadiusSquared;
-            if (security2 <= outer2 || (!g.Periodic && outer2 > _diagonal2)) break;
+            if (security2 > outer2 && _domain.Kind == DomainKind.Sphere && !preclipped)
+            {
+                PreclipToSphere(gx, gy, gz);
+                preclipped = true;
+                security2 = 4.0 * cell.MaxRadiusSquared;
+            }
+            if (security2 <= outer2 || (_domain.Kind != DomainKind.PeriodicBox && outer2 > _diagonal2)) break;
             inner2 = outer2;
             // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
             outer = Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
         }
         _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
-        if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz);
-        PlanesTested += tested;
-        PlanesCut += cutCount;
-        cell.BuildFaceRings();
-        Measure(self, gx, gy, gz, faces);
     }
+
+    // Relative excess radius of the coarse tangent-plane pre-clip.
+    private const double PreclipTolerance = 0.02;
+
+    /// <summary>
+    /// In a ball, a cell still unfinished after its first neighbours usually reaches out of the ball (a surface cell
+    /// of a steep envelope, or one next to the empty corners of the bounding cube); its security radius would then
+    /// sweep much of the body. Tangent planes to within R(1 + 0.02) bound it first; they are planes the final
+    /// tangent-plane pass could have added (each is tangent to the ball), so the cell still contains its part of the
+    /// ball and ends within R(1 + δ).
+    /// </summary>
+    private void PreclipToSphere(double gx, double gy, double gz)
+    {
+        if (PreclipTolerance > _options.SphereTolerance) ClipToSphere(gx, gy, gz, PreclipTolerance);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private void ClipBy(double dx, double dy, double dz, double d2, int self, int other, double gx, double gy, double gz)
+    {
+        if (d2 <= _duplicate2) ThrowDuplicate(self, other, d2, gx, gy, gz);
+        if (_first)
+        {
+            // Tolerance from the first (near-nearest) neighbour: rounding scales with the cell size.
+            _cell.Tolerance = _options.ClipTolerance * Math.Sqrt(d2);
+            _first = false;
+        }
+        PlanesTested++;
+        if (_cell.Clip(dx, dy, dz, 0.5 * d2, other)) PlanesCut++;
+    }
+
+    private static void ThrowDuplicate(int self, int other, double d2, double gx, double gy, double gz) =>
+        throw new ArgumentException(
+            $"Points {Math.Min(self, other)} and {Math.Max(self, other)} coincide (distance {Math.Sqrt(d2)} at ({gx}, {gy}, {gz})); a Voronoi tessellation needs distinct generators: remove or merge duplicates first.");
 
     // Indices of the buffer's neighbours in near-first order: 16 buckets of equal width in d² over the shell
     // [inner², outer²), unsorted within a bucket. Exact order is not needed for correctness (the cell is complete
@@ -129,11 +193,11 @@ internal sealed class CellBuilder
         return _order.AsSpan(0, n);
     }
 
-    private void ClipToSphere(double gx, double gy, double gz)
+    private void ClipToSphere(double gx, double gy, double gz, double tolerance)
     {
         var d = _domain;
         var cell = _cell;
-        double r = d.Radius, limit2 = r * r * (1 + _options.SphereTolerance) * (1 + _options.SphereTolerance);
+        double r = d.Radius, limit2 = r * r * (1 + tolerance) * (1 + tolerance);
         double ox = gx - d.CenterX, oy = gy - d.CenterY, oz = gz - d.CenterZ;
         for (int iteration = 0; iteration < 100_000; iteration++)
         {

@@ -194,6 +194,14 @@ internal sealed class ConvexCell
         if (steps != boundary || x != first) return false;
 
         int p = AddPlane(nx, ny, nz, d, neighbour);
+        // The farthest vertex survives unless it is among the removed ones; then the new maximum is the old one or
+        // a new vertex, and the full rescan below is skipped.
+        double oldMax = MaxRadiusSquared, newMax = 0;
+        bool farthestRemoved = false;
+        int removedWords = (_triCount + 63) >> 6;
+        for (int w = 0; w < removedWords && !farthestRemoved; w++)
+            for (ulong bits = _removed[w]; bits != 0; bits &= bits - 1)
+                if (_vr2[(w << 6) + BitOperations.TrailingZeroCount(bits)] >= oldMax) { farthestRemoved = true; break; }
         // Fill removed slots with the new triangles (x, next[x], p), append the rest.
         int slot = 0; // word cursor into _removed
         x = first;
@@ -208,7 +216,7 @@ internal sealed class ConvexCell
                 t = _triCount++;
             }
             _ta[t] = x; _tb[t] = y; _tc[t] = p;
-            SetVertex(t, x, y, p);
+            newMax = Math.Max(newMax, SetVertex(t, x, y, p));
             x = y;
         }
         // Remaining removed slots (the patch had interior vertices): compact, keeping order.
@@ -223,9 +231,14 @@ internal sealed class ConvexCell
             }
             _triCount = write;
         }
+        if (!farthestRemoved)
+        {
+            MaxRadiusSquared = Math.Max(oldMax, newMax);
+            return true;
+        }
         double max = 0;
-        var r2 = _vr2;
-        for (int t = 0; t < _triCount; t++) if (r2[t] > max) max = r2[t];
+        var r2 = _vr2.AsSpan(0, _triCount);
+        foreach (double v in r2) if (v > max) max = v;
         MaxRadiusSquared = max;
         return true;
     }
@@ -301,21 +314,25 @@ internal sealed class ConvexCell
         _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
     }
 
+    // Sets the vertex of triangle t, where planes a, b and c meet, and returns its squared distance from the generator.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private void SetVertex(int t, int a, int b, int c)
+    private double SetVertex(int t, int a, int b, int c)
     {
         // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)).
-        double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], cx = _nx[c], cy = _ny[c], cz = _nz[c];
+        var pnx = _nx; var pny = _ny; var pnz = _nz; var pd = _d;
+        double ax = pnx[a], ay = pny[a], az = pnz[a], bx = pnx[b], by = pny[b], bz = pnz[b], cx = pnx[c], cy = pny[c], cz = pnz[c];
         double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
         double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
         double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
         double det = ax * bcx + ay * bcy + az * bcz;
-        double da = _d[a], db = _d[b], dc = _d[c];
+        double da = pd[a], db = pd[b], dc = pd[c];
         double inv = 1.0 / det;
-        _vx[t] = (da * bcx + db * cax + dc * abx) * inv;
-        _vy[t] = (da * bcy + db * cay + dc * aby) * inv;
-        _vz[t] = (da * bcz + db * caz + dc * abz) * inv;
-        _vr2[t] = _vx[t] * _vx[t] + _vy[t] * _vy[t] + _vz[t] * _vz[t];
+        double vx = (da * bcx + db * cax + dc * abx) * inv;
+        double vy = (da * bcy + db * cay + dc * aby) * inv;
+        double vz = (da * bcz + db * caz + dc * abz) * inv;
+        double r2 = vx * vx + vy * vy + vz * vz;
+        _vx[t] = vx; _vy[t] = vy; _vz[t] = vz; _vr2[t] = r2;
+        return r2;
     }
 
     // Face rings: for plane p, the triangles around its face in order, Ring[RingStart[p] .. RingStart[p+1]).

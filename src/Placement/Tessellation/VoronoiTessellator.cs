@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Runtime.ExceptionServices;
 using Placement.Parallelism;
 using Placement.Spatial;
@@ -21,6 +22,9 @@ public sealed class VoronoiTessellator
     private PointGrid? _grid;
     private VoronoiCells? _cells;
     private int[] _order = [];
+
+    /// <summary>True when the last call gathered neighbours from a k-d tree rather than the uniform grid.</summary>
+    public bool UsedKdTree { get; private set; }
 
     /// <summary>The region this tessellator fills.</summary>
     public TessellationDomain Domain => _domain;
@@ -78,6 +82,14 @@ public sealed class VoronoiTessellator
         var grid = _grid;
         var cells = _cells;
         if (n == 0) return cells;
+        bool useTree = domain.Kind != DomainKind.PeriodicBox && options.NeighbourIndex switch
+        {
+            NeighbourIndexKind.KdTree => true,
+            NeighbourIndexKind.UniformGrid => false,
+            _ => Crowding(grid) > options.GridCrowdingLimit,
+        };
+        var tree = useTree ? new KdTree(x, y, z) : null;
+        UsedKdTree = useTree;
 
         var settings = options.Parallel ?? ParallelSettings.Default;
         int chunk = ParallelLoop.ChunkSize(n, Math.Min(settings.MinimumChunk, 2048));
@@ -86,17 +98,26 @@ public sealed class VoronoiTessellator
         double spacing = Math.Cbrt(domain.Volume / n);
         var loopSettings = settings with { MinimumChunk = chunk };
         var order = _order;
-        TiledOrder(grid, order);
+        if (tree is null) TiledOrder(grid, order);
+        else for (int k = 0; k < n; k++) order[k] = k; // tree order is already spatially coherent
+        var index = tree is null ? grid.SortedIndex : tree.SortedIndex;
         try
         {
+            // Workers (with scratch grown to the largest cells seen) are pooled across chunks rather than made per
+            // chunk: crowded sets grow neighbour buffers to many thousands of entries. Each chunk restarts the worker's
+            // state, so results do not depend on which worker ran which chunk.
+            var pool = new ConcurrentBag<CellBuilder>();
             ParallelLoop.For(n, loopSettings, (start, end) =>
             {
-                var worker = new CellBuilder(grid, domain, options, cells, spacing);
+                if (!pool.TryTake(out var worker))
+                    worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing) : new CellBuilder(null, tree, domain, options, cells, spacing);
+                worker.BeginChunk();
                 FaceBuffer? faces = chunkFaces is null ? null : new FaceBuffer();
                 for (int k = start; k < end; k++) worker.Build(order[k], faces);
                 if (chunkFaces is not null) chunkFaces[start / chunk] = faces!;
                 Interlocked.Add(ref tested, worker.PlanesTested);
                 Interlocked.Add(ref cut, worker.PlanesCut);
+                pool.Add(worker);
             });
         }
         catch (AggregateException ae) when (ae.InnerExceptions.Count > 0)
@@ -106,7 +127,7 @@ public sealed class VoronoiTessellator
         }
         cells.PlanesTested = tested;
         cells.PlanesCut = cut;
-        if (chunkFaces is not null) AssembleFaces(cells, grid, order, chunkFaces, chunk);
+        if (chunkFaces is not null) AssembleFaces(cells, index, order, chunkFaces, chunk);
         return cells;
     }
 
@@ -132,7 +153,23 @@ public sealed class VoronoiTessellator
                         }
     }
 
-    private static void AssembleFaces(VoronoiCells cells, PointGrid grid, int[] order, FaceBuffer[] chunkFaces, int chunk)
+    /// <summary>
+    /// Mean number of points sharing a point's grid cell, Σ_c n_c² / N: about 1 + λ for λ points per cell spread
+    /// at random, and large when the points crowd into a few cells.
+    /// </summary>
+    private static double Crowding(PointGrid grid)
+    {
+        var start = grid.CellStart;
+        double sum = 0;
+        for (int c = 0; c + 1 < start.Length; c++)
+        {
+            double m = start[c + 1] - start[c];
+            sum += m * m;
+        }
+        return sum / Math.Max(grid.Count, 1);
+    }
+
+    private static void AssembleFaces(VoronoiCells cells, int[] index, int[] order, FaceBuffer[] chunkFaces, int chunk)
     {
         var start = cells.FaceStart!;
         for (int i = 0; i < cells.Count; i++) start[i + 1] = start[i] + cells.FaceCount[i];
@@ -145,7 +182,7 @@ public sealed class VoronoiTessellator
             int end = Math.Min(cells.Count, (c + 1) * chunk);
             for (int k = c * chunk; k < end; k++)
             {
-                int i = grid.SortedIndex[order[k]];
+                int i = index[order[k]];
                 int m = cells.FaceCount[i];
                 buffer.Neighbour.AsSpan(read, m).CopyTo(neighbour.AsSpan(start[i], m));
                 buffer.Area.AsSpan(read, m).CopyTo(area.AsSpan(start[i], m));

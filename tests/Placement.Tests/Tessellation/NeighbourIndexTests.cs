@@ -1,0 +1,103 @@
+using Placement.Parallelism;
+using Placement.Random;
+using Placement.Tessellation;
+
+namespace Placement.Tests.Tessellation;
+
+public class NeighbourIndexTests
+{
+    [Fact]
+    public void KdTreeAndGrid_GiveTheSameCells()
+    {
+        var (x, y, z) = TestPoints.Uniform(4000, 41);
+        var grid = VoronoiTessellation.Compute(x, y, z, TessellationDomain.UnitCube(), new TessellationOptions { NeighbourIndex = NeighbourIndexKind.UniformGrid });
+        grid.CheckValidity(x, y, z, 1e-12);
+        var tree = VoronoiTessellation.Compute(x, y, z, TessellationDomain.UnitCube(), new TessellationOptions { NeighbourIndex = NeighbourIndexKind.KdTree });
+        tree.CheckValidity(x, y, z, 1e-12);
+        for (int i = 0; i < x.Length; i++)
+        {
+            // Same bisecting planes clipped in a different order: vertices differ by rounding only (common practice:
+            // 1e-12 relative is far above double rounding of a ~30-vertex cell and far below any real difference).
+            Assert.True(Math.Abs(tree.Volume[i] / grid.Volume[i] - 1) < 1e-12, $"cell {i}: {tree.Volume[i]} vs {grid.Volume[i]}");
+            Assert.Equal(grid.FaceCount[i], tree.FaceCount[i]);
+            Assert.Equal(grid.CentroidX[i], tree.CentroidX[i], 12);
+        }
+    }
+
+    [Fact]
+    public void CuspedSet_SwitchesToTheTree_AndStaysExact()
+    {
+        // Hernquist-like cusp (M(<r) ∝ r²/(r + a)², a = 1) cut at r = 50 in the box [−50, 50]³: nearly all points
+        // crowd a few grid cells, so the automatic choice must take the tree; the volumes still tile the box.
+        var (x, y, z) = Cusp(3000, 7, 50);
+        var tessellator = new VoronoiTessellator(TessellationDomain.Box(-50, -50, -50, 50, 50, 50), new TessellationOptions { KeepFaces = true });
+        var cells = tessellator.Compute(x, y, z);
+        Assert.True(tessellator.UsedKdTree);
+        cells.CheckValidity(x, y, z, 1e-12);
+
+        var (ux, uy, uz) = TestPoints.Uniform(3000, 8);
+        var uniform = new VoronoiTessellator(TessellationDomain.UnitCube());
+        uniform.Compute(ux, uy, uz);
+        Assert.False(uniform.UsedKdTree);
+    }
+
+    [Fact]
+    public void KdTreeResults_AreIdenticalOnOneAndTwoThreads()
+    {
+        var (x, y, z) = Cusp(12000, 9, 20);
+        var domain = TessellationDomain.Sphere(0, 0, 0, 20);
+        // Chunk boundaries (which depend on the minimum chunk, never on the thread count) are the same in both runs.
+        var one = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions
+        {
+            NeighbourIndex = NeighbourIndexKind.KdTree,
+            Parallel = new ParallelSettings { MaxDegreeOfParallelism = 1, MinimumChunk = 1000 },
+        });
+        var two = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions
+        {
+            NeighbourIndex = NeighbourIndexKind.KdTree,
+            Parallel = new ParallelSettings { MaxDegreeOfParallelism = 2, MinimumChunk = 1000 },
+        });
+        Assert.Equal(one.Volume, two.Volume);
+        Assert.Equal(one.FaceCount, two.FaceCount);
+        one.CheckValidity(x, y, z, 1e-12);
+    }
+
+    [Fact]
+    public void KdTreeShells_GatherEachPointOnce_LikeBruteForce()
+    {
+        var (x, y, z) = Cusp(3000, 13, 10);
+        var tree = new Placement.Spatial.KdTree(x, y, z);
+        var buffer = new Placement.Spatial.NeighbourBuffer();
+        for (int s = 0; s < 200; s += 7)
+        {
+            double qx = tree.SortedX[s], qy = tree.SortedY[s], qz = tree.SortedZ[s];
+            var seen = new int[x.Length];
+            double[] radii = [0, 0.05, 0.3, 1.5, 40];
+            for (int k = 0; k + 1 < radii.Length; k++)
+            {
+                buffer.Clear();
+                tree.CollectInShell(qx, qy, qz, radii[k] * radii[k], radii[k + 1] * radii[k + 1], s, buffer);
+                foreach (int slot in buffer.Slot) seen[tree.SortedIndex[slot]]++;
+            }
+            // Brute force: every other point lies within 40 of the query (the set spans radius 10) and is seen once.
+            for (int j = 0; j < x.Length; j++)
+                Assert.Equal(j == tree.SortedIndex[s] ? 0 : 1, seen[j]);
+        }
+    }
+
+    // Points with enclosed mass M(<r) ∝ r²/(r + 1)² inside radius rMax (inverse transform), random directions.
+    private static (double[] X, double[] Y, double[] Z) Cusp(int n, ulong seed, double rMax)
+    {
+        var x = new double[n]; var y = new double[n]; var z = new double[n];
+        double top = rMax * rMax / ((rMax + 1) * (rMax + 1));
+        for (int i = 0; i < n; i++)
+        {
+            var rng = new KeyedRandom(seed, (ulong)i);
+            double s = Math.Sqrt(top * rng.NextDouble());
+            double r = Math.Min(s / (1 - s), rMax * (1 - 1e-9));
+            double c = 2 * rng.NextDouble() - 1, phi = 2 * Math.PI * rng.NextDouble(), w = Math.Sqrt(1 - c * c);
+            x[i] = r * w * Math.Cos(phi); y[i] = r * w * Math.Sin(phi); z[i] = r * c;
+        }
+        return (x, y, z);
+    }
+}
