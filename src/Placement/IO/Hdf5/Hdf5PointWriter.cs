@@ -57,6 +57,7 @@ public static class Hdf5PointWriter
 
         var provenance = points.Provenance;
         var file = new H5File { [Hdf5Layout.PointsGroup] = group };
+        if (Hdf5PointMasses.Build(table) is { } pointMasses) file[Hdf5Layout.PointMassesGroup] = pointMasses;
         var a = file.Attributes;
         a[Hdf5Layout.FormatAttribute] = Hdf5Layout.FormatName;
         a[Hdf5Layout.FormatVersionAttribute] = Hdf5Layout.FormatVersion;
@@ -83,7 +84,7 @@ public static class Hdf5PointWriter
         JsonSerializer.Serialize(new SortedDictionary<string, string>(
             provenance.Parameters.ToDictionary(p => p.Key, p => p.Value), StringComparer.Ordinal));
 
-    private static H5Dataset Dataset(Array data, int n, int components, string unit, double cgsFactor, string description)
+    internal static H5Dataset Dataset(Array data, int n, int components, string unit, double cgsFactor, string description)
     {
         ulong[] dims = components == 1 ? [(ulong)n] : [(ulong)n, (ulong)components];
         return new H5Dataset(data, fileDims: dims)
