@@ -25,8 +25,7 @@ internal static class PlaceCommand
         var outputs = new OutputArguments();
         var rotation = new Option<string?>("--rotation")
         {
-            Description = "Give the points a rotation velocity about the z axis: 'omega=W' (W in 1/time of the unit system) or "
-                + "'breakup=F' (F times the break-up rate sqrt(GM/R^3)); written as the 'velocity' column. Default: at rest (no column).",
+            Description = RotationArguments.Help,
         };
         var command = new Command("place", "Place points (SPH particles or mesh generators) for a profile and write them to a point file; optionally check them (--report, --plots).");
         profile.AddTo(command);
@@ -68,12 +67,13 @@ internal static class PlaceCommand
                 cells.Mass!.CopyTo(result.Points.Mass, 0);
                 table.Add(PointColumnNames.CellVolume, cells.Volume, QuantityDimension.Volume, "Voronoi cell volume (ball domain of the profile radius)");
             }
+            var notes = new List<string>(result.Plan.Notes);
             if (parse.GetValue(rotation) is { } spec)
             {
-                double omega = RotationRate(spec, body);
-                var (vx, vy, vz) = Bodies.Rotation.Velocities(result.Points, _ => omega, null, request.Parallel);
-                table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units,
-                    string.Create(System.Globalization.CultureInfo.InvariantCulture, $"solid-body rotation about +z, Omega = {omega:R} per time unit")));
+                var (omega, description, note) = RotationArguments.Parse(spec, body);
+                var (vx, vy, vz) = Bodies.Rotation.Velocities(result.Points, omega, null, request.Parallel);
+                table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units, description));
+                if (note is not null) notes.Add(note);
             }
             context.Stage($"writing {path}", _ =>
             {
@@ -88,7 +88,7 @@ internal static class PlaceCommand
             }
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
-                result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray());
+                result.Points.TotalMass(), body.TotalMass, seconds, notes.ToArray());
             if (context.Json) context.Output.WriteLine(JsonSerializer.Serialize(summary, CliJson.Options));
             else if (!context.Quiet)
             {
@@ -100,17 +100,6 @@ internal static class PlaceCommand
             return ExitCodes.Ok;
         });
         return command;
-    }
-
-    /// <summary>Parses 'omega=W' or 'breakup=F' into an angular velocity in 1/time units of the profile.</summary>
-    private static double RotationRate(string spec, Profiles.IRadialProfile body)
-    {
-        int eq = spec.IndexOf('=', StringComparison.Ordinal);
-        string key = eq > 0 ? spec[..eq].Trim().ToLowerInvariant() : "";
-        if (eq <= 0 || !double.TryParse(spec[(eq + 1)..], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double value)
-            || !double.IsFinite(value) || key is not ("omega" or "breakup"))
-            throw new CliException(ExitCodes.Usage, $"--rotation '{spec}' is not 'omega=<number>' or 'breakup=<fraction>'.");
-        return key == "omega" ? value : value * Bodies.Rotation.BreakupAngularVelocity(body);
     }
 
     private sealed record PlaceSummary(
