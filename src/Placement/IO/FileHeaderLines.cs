@@ -38,6 +38,9 @@ internal static class FileHeaderLines
             foreach (var p in table.PointMasses)
                 lines.Add(new("point_mass", string.Join(',', p.Name, R(p.Mass), R(p.SofteningLength), R(p.X), R(p.Y), R(p.Z), R(p.Vx), R(p.Vy), R(p.Vz))));
         }
+        if (table.Background is { } b)
+            lines.Add(new("background", string.Create(inv,
+                $"box [{R(b.MinX)}, {R(b.MaxX)}] x [{R(b.MinY)}, {R(b.MaxY)}] x [{R(b.MinZ)}, {R(b.MaxZ)}] {units.LengthUnitName}, periodic {(b.Periodic ? "yes" : "no")}, density {R(b.Density)} {units.DensityUnitName}, pressure {R(b.Pressure)} (mass/(length time^2) units), layer {Points.PointLayers.Background}")));
         for (int i = 0; i < lines.Count; i++)
             lines[i] = new(lines[i].Key, lines[i].Value.ReplaceLineEndings(" "));
         return lines;

@@ -55,6 +55,12 @@ public sealed class PointTable
     /// </summary>
     public List<Bodies.PointMass> PointMasses { get; } = [];
 
+    /// <summary>
+    /// The background medium's box, density and pressure when the table holds background points (layer
+    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
+    /// </summary>
+    public Bodies.Background.BackgroundBox? Background { get; set; }
+
     /// <summary>Extra columns in the order they were added.</summary>
     public IReadOnlyList<PointColumn> Columns => _columns;
 
@@ -114,6 +120,7 @@ public sealed class PointTable
     {
         Points.CheckValidity();
         foreach (var pointMass in PointMasses) pointMass.CheckValidity();
+        Background?.CheckValidity();
         if (_ids is not null && _ids.Length != Count)
             throw new InvalidOperationException($"Ids has {_ids.Length} values but the point set has {Count} points.");
         foreach (var column in _columns)

@@ -103,6 +103,8 @@ public static class Hdf5PointReader
         }
         if (root.LinkExists(Hdf5Layout.PointMassesGroup))
             table.PointMasses.AddRange(Hdf5PointMasses.Read(path, root.Group(Hdf5Layout.PointMassesGroup)));
+        if (root.LinkExists(Hdf5Layout.BackgroundGroup))
+            table.Background = Hdf5Background.Read(path, root.Group(Hdf5Layout.BackgroundGroup));
         return table;
     }
 
