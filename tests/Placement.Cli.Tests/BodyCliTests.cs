@@ -42,4 +42,97 @@ public sealed class BodyCliTests : IDisposable
         Assert.Contains("fast", error, StringComparison.Ordinal);
         Assert.False(File.Exists(PathOf("bad.h5")));
     }
+
+    [Fact]
+    public void CompanionAndBackground_AreWrittenReadBack_AndEverythingIsInTheCentreOfMassFrame()
+    {
+        string h5 = PathOf("binary.h5");
+        var (code, output, error) = CliRunner.Run("place", "-p", "polytrope:n=1.5", "-n", "3000", "--rotation", "breakup=0.1",
+            "--companion", "mass=0.5,separation=3,eccentricity=0.3,softening=0.05",
+            "--background", "box=10,density=1e-5,pressure=1e-7,periodic", "-o", h5, "--json", "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        using (var doc = JsonDocument.Parse(output))
+        {
+            var body = doc.RootElement.GetProperty("body");
+            Assert.Equal("companion", body.GetProperty("pointMasses")[0].GetProperty("name").GetString());
+            Assert.True(body.GetProperty("background").GetProperty("points").GetInt32() > 1000);
+            Assert.True(body.GetProperty("residualOffset").GetDouble() < 1e-13);
+        }
+        var table = Placement.IO.PointFiles.Read(h5);
+        var p = table.Points;
+        var companion = Assert.Single(table.PointMasses);
+        Assert.Equal(0.5, companion.Mass);
+        Assert.Equal(0.05, companion.SofteningLength);
+        Assert.NotNull(table.Background);
+        Assert.True(table.Background!.Periodic);
+        Assert.Equal(10.0, table.Background.MaxX - table.Background.MinX, 1e-12);
+
+        // Σ m x and Σ m v over gas, background and companion vanish (read back from the file; rounding of positions up to
+        // the box half-side 5 and of momenta ~ m v ~ 0.3: 1e-13 leaves a wide margin).
+        var v = table.Find("velocity")!.Components;
+        double m = 0, mx = 0, my = 0, px = 0, py = 0;
+        int background = 0;
+        for (int i = 0; i < p.Count; i++)
+        {
+            m += p.Mass[i]; mx += p.Mass[i] * p.X[i]; my += p.Mass[i] * p.Y[i];
+            px += p.Mass[i] * v[0][i]; py += p.Mass[i] * v[1][i];
+            if (p.Layer[i] == -2) background++;
+        }
+        m += companion.Mass; mx += companion.Mass * companion.X; my += companion.Mass * companion.Y;
+        px += companion.Mass * companion.Vx; py += companion.Mass * companion.Vy;
+        Assert.True(Math.Abs(mx / m) < 1e-13 && Math.Abs(my / m) < 1e-13, $"COM ({mx / m}, {my / m})");
+        Assert.True(Math.Abs(px / m) < 1e-13 && Math.Abs(py / m) < 1e-13, $"momentum ({px / m}, {py / m})");
+        Assert.Equal(p.Count - 3000, background);
+
+        // Body centre: mass-weighted mean of the gas points (layer >= 0). It sits a(1+e) = 3.9 from the companion
+        // (apastron, the default phase) and no background point lies within the body radius 1 of it.
+        double bm = 0, bx = 0, by = 0, bz = 0;
+        for (int i = 0; i < p.Count; i++)
+            if (p.Layer[i] >= 0) { bm += p.Mass[i]; bx += p.Mass[i] * p.X[i]; by += p.Mass[i] * p.Y[i]; bz += p.Mass[i] * p.Z[i]; }
+        bx /= bm; by /= bm; bz /= bm;
+        Assert.Equal(3.9, Math.Sqrt((companion.X - bx) * (companion.X - bx) + (companion.Y - by) * (companion.Y - by)), 1e-3);
+        for (int i = 0; i < p.Count; i++)
+            if (p.Layer[i] == -2)
+                Assert.True(Math.Sqrt((p.X[i] - bx) * (p.X[i] - bx) + (p.Y[i] - by) * (p.Y[i] - by) + (p.Z[i] - bz) * (p.Z[i] - bz)) > 1.0);
+        Assert.Equal(1e-7, table.Find("pressure")!.Components[0][p.Count - 1]);
+    }
+
+    [Fact]
+    public void MeshModeWithBackground_GivesEveryCellItsMass_AddingUpToBodyPlusMedium()
+    {
+        string h5 = PathOf("mesh-bg.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "2000", "--mode", "mesh",
+            "--background", "box=4,density=0.01", "-o", h5, "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        var table = Placement.IO.PointFiles.Read(h5);
+        // M + ρ_bg (L³ − 4π/3 R³) (definition); cell quadrature leaves ~1e-6 relative (CellMasses documentation).
+        double expected = 1 + 0.01 * (64 - 4.0 / 3.0 * Math.PI);
+        Assert.Equal(expected, table.Points.TotalMass(), 1e-5 * expected);
+        Assert.Equal(64.0, table.Find("cell_volume")!.Components[0].Sum(), 1e-9);
+    }
+
+    [Fact]
+    public void CompanionInCsv_IsACommentRow()
+    {
+        string csv = PathOf("binary.csv");
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "500", "--companion", "mass=0.3,separation=4,name=bh", "-o", csv, "--quiet");
+        Assert.True(code == ExitCodes.Ok, error);
+        Assert.Contains(File.ReadLines(csv), l => l.StartsWith("# point_mass: bh,0.3,0,", StringComparison.Ordinal));
+    }
+
+    [Theory]
+    [InlineData("--companion", "mass=abc,separation=3", "mass=abc")]
+    [InlineData("--companion", "mass=1,separation=3,eccentricity=1.2", "eccentricity=1.2")]
+    [InlineData("--companion", "mass=1,separation=3,spin=2", "spin=2")]
+    [InlineData("--companion", "mass=1", "separation")]
+    [InlineData("--background", "box=10,density=-1", "density")]
+    [InlineData("--background", "box=1.5,density=1e-3", "does not hold the body")]
+    [InlineData("--background", "box=10,density=1e-3,walls", "walls")]
+    public void BadBodyOptions_GiveUsageExitCode_NamingTheToken(string option, string value, string mentioned)
+    {
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "300", "-o", PathOf("no.h5"), option, value);
+        Assert.Equal(ExitCodes.Usage, code);
+        Assert.Contains(mentioned, error, StringComparison.Ordinal);
+        Assert.False(File.Exists(PathOf("no.h5")));
+    }
 }

@@ -23,6 +23,7 @@ internal static class PlaceCommand
             Required = true,
         };
         var outputs = new OutputArguments();
+        var bodyArguments = new BodyArguments();
         var rotation = new Option<string?>("--rotation")
         {
             Description = RotationArguments.Help,
@@ -32,6 +33,7 @@ internal static class PlaceCommand
         sampling.AddTo(command);
         command.Options.Add(output);
         command.Options.Add(rotation);
+        bodyArguments.AddTo(command);
         outputs.AddTo(command);
         command.SetAction(parse =>
         {
@@ -50,12 +52,13 @@ internal static class PlaceCommand
             var body = context.Stage("loading profile", _ => profile.Load(parse));
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
+            var assembly = bodyArguments.Request(parse, request);
             var clock = Stopwatch.StartNew();
             var result = context.Stage($"placing {request.Count:N0} points with {sampler.Name}", _ => PointSampling.Place(sampler, request));
             double seconds = clock.Elapsed.TotalSeconds;
             result.Points.CheckValidity();
             var table = new PointTable(result.Points);
-            if (request.Mode == SamplingMode.MeshGenerators)
+            if (request.Mode == SamplingMode.MeshGenerators && assembly?.Background is null)
             {
                 // Mesh generators: each point's mass becomes the profile mass of its own Voronoi cell (∫ρ dV by quadrature),
                 // so the set starts with the exact mass in every cell; the cell volumes go into the file too.
@@ -75,6 +78,8 @@ internal static class PlaceCommand
                 table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units, description));
                 if (note is not null) notes.Add(note);
             }
+            Bodies.BodyAssemblySummary? added = null;
+            if (assembly is not null) (table, added) = BodyArguments.Assemble(context, table, body, assembly);
             context.Stage($"writing {path}", _ =>
             {
                 PointFiles.Write(table, path, replace);
@@ -88,13 +93,14 @@ internal static class PlaceCommand
             }
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
-                result.Points.TotalMass(), body.TotalMass, seconds, notes.ToArray());
+                result.Points.TotalMass(), body.TotalMass, seconds, notes.ToArray(), added);
             if (context.Json) context.Output.WriteLine(JsonSerializer.Serialize(summary, CliJson.Options));
             else if (!context.Quiet)
             {
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                     $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
+                if (added is not null) foreach (string line in BodyArguments.Describe(added, result.Points.Units)) context.Output.WriteLine(line);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;
@@ -104,5 +110,5 @@ internal static class PlaceCommand
 
     private sealed record PlaceSummary(
         string Output, string Sampler, int Points, int RequestedPoints, ulong Seed, string Units,
-        double TotalMass, double ProfileMass, double Seconds, string[] Notes);
+        double TotalMass, double ProfileMass, double Seconds, string[] Notes, Bodies.BodyAssemblySummary? Body);
 }
