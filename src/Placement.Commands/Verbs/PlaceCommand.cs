@@ -98,7 +98,7 @@ internal static class PlaceCommand
             else if (!context.Quiet)
             {
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
+                    $"wrote {table.Count:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
                 if (added is not null) foreach (string line in BodyArguments.Describe(added, result.Points.Units)) context.Output.WriteLine(line);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
