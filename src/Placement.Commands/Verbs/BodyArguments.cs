@@ -65,7 +65,8 @@ internal sealed class BodyArguments
         }
         catch (ArgumentException e)
         {
-            throw new CliException(ExitCodes.Usage, e.Message);
+            string message = e.ParamName is null ? e.Message : e.Message.Replace($" (Parameter '{e.ParamName}')", "", StringComparison.Ordinal);
+            throw new CliException(ExitCodes.Usage, message);
         }
     }
 
