@@ -19,6 +19,7 @@ public class BackgroundMediumTests(ITestOutputHelper output)
     [InlineData(false, "healpix-shells")]
     [InlineData(true, "healpix-shells")]
     [InlineData(false, "stretched-lattice")]
+    [InlineData(true, "poisson")]
     public void Background_FillsTheBoxAroundTheBody_WithoutGapOrOverlapAtTheSurface(bool periodic, string sampler)
     {
         var profile = new Polytrope(1.5, 1.0, 1.0, UnitSystem.Solar);
@@ -67,14 +68,13 @@ public class BackgroundMediumTests(ITestOutputHelper output)
         output.WriteLine($"{sampler} periodic={periodic}: N_bg={p.Count} shells={bg.ShellCount} s0={bg.SurfaceSpacing:G4} r0={bg.InnerRadius:G5} outer s={bg.OuterSpacing:G4}");
         output.WriteLine($"  sum V / V_box - 1 = {total / bg.Domain.Volume - 1:E2}; body cells / ball - 1 = {surfaceMismatch:E3}; inner/body spacing = {ratio:F3}; mass error = {massError:E2}; min r = {minRadius:F4}");
         // Tolerances: our own measured values with a margin, not an outside source. A gap or an overlap of half a surface
-        // spacing all round would move the body's volume by ~3 × 0.5 s0 / R ≈ 15 %. Measured: −0.57 % for HEALPix shells
-        // (a closed outer shell), −6.2 % for the stretched lattice, whose cut outer layer is ragged and lets background
-        // cells reach into its gaps.
-        double allowed = sampler == "healpix-shells" ? 0.01 : 0.08;
-        Assert.True(Math.Abs(surfaceMismatch) < allowed, $"body cells / ball − 1 = {surfaceMismatch}");
+        // spacing all round would move the body's volume by ~3 × 0.5 s0 / R ≈ 15 %. Measured here: −0.78 % (HEALPix shells),
+        // +2.6 % (stretched lattice), see the output for Poisson; over five samplers and three profiles at 20 000 points
+        // −2.6 … +2.3 % (random shells up to +7.8 %, documented in BackgroundMedium).
+        Assert.True(Math.Abs(surfaceMismatch) < 0.04, $"body cells / ball − 1 = {surfaceMismatch}");
         Assert.InRange(ratio, 0.7, 1.4);
-        // The shortfall is ρ_bg times the volume of body cells beyond R; measured 5e-5 (shells) and 9e-5 (lattice) of the total.
-        Assert.True(massError < 0 && massError > -1e-3, $"background mass error {massError}");
+        // The shortfall is ρ_bg times the volume of body cells beyond R; measured −6.6e-5 (shells), −1.3e-3 (lattice).
+        Assert.True(massError < 0 && massError > -3e-3, $"background mass error {massError}");
         Assert.True(bg.OuterSpacing > 2 * bg.SurfaceSpacing, "spacing should coarsen toward the box edge");
     }
 
