@@ -23,7 +23,7 @@ internal static class PlaceCommand
             Required = true,
         };
         var outputs = new OutputArguments();
-        var bodyArguments = new BodyArguments();
+        var systemArguments = new CompanionBackgroundArguments();
         var rotation = new Option<string?>("--rotation")
         {
             Description = RotationArguments.Help,
@@ -33,7 +33,7 @@ internal static class PlaceCommand
         sampling.AddTo(command);
         command.Options.Add(output);
         command.Options.Add(rotation);
-        bodyArguments.AddTo(command);
+        systemArguments.AddTo(command);
         outputs.AddTo(command);
         command.SetAction(parse =>
         {
@@ -52,7 +52,7 @@ internal static class PlaceCommand
             var body = context.Stage("loading profile", _ => profile.Load(parse));
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
-            var assembly = bodyArguments.Request(parse, request);
+            var assembly = systemArguments.Request(parse, request);
             var clock = Stopwatch.StartNew();
             var result = context.Stage($"placing {request.Count:N0} points with {sampler.Name}", _ => PointSampling.Place(sampler, request));
             double seconds = clock.Elapsed.TotalSeconds;
@@ -79,7 +79,7 @@ internal static class PlaceCommand
                 if (note is not null) notes.Add(note);
             }
             Bodies.BodyAssemblySummary? added = null;
-            if (assembly is not null) (table, added) = BodyArguments.Assemble(context, table, body, assembly);
+            if (assembly is not null) (table, added) = CompanionBackgroundArguments.Assemble(context, table, body, assembly);
             context.Stage($"writing {path}", _ =>
             {
                 PointFiles.Write(table, path, replace);
@@ -100,7 +100,7 @@ internal static class PlaceCommand
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
                     $"wrote {table.Count:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
-                if (added is not null) foreach (string line in BodyArguments.Describe(added, result.Points.Units)) context.Output.WriteLine(line);
+                if (added is not null) foreach (string line in CompanionBackgroundArguments.Describe(added, result.Points.Units)) context.Output.WriteLine(line);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;

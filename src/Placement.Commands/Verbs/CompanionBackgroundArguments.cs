@@ -12,7 +12,7 @@ namespace Placement.Commands.Verbs;
 /// The <c>place</c> options that add to the body: <c>--companion</c> (repeatable) and <c>--background</c>, their parsing
 /// into library requests, the assembly (<see cref="BodyAssembly"/>) and the lines printed about it.
 /// </summary>
-internal sealed class BodyArguments
+internal sealed class CompanionBackgroundArguments
 {
     public Option<string[]> Companions { get; } = new("--companion")
     {
