@@ -55,12 +55,6 @@ public sealed class PointTable
     /// </summary>
     public List<Bodies.PointMass> PointMasses { get; } = [];
 
-    /// <summary>
-    /// The background medium's box, density and pressure when the table holds background points (layer
-    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
-    /// </summary>
-    public Bodies.Background.BackgroundBox? Background { get; set; }
-
     /// <summary>Extra columns in the order they were added.</summary>
     public IReadOnlyList<PointColumn> Columns => _columns;
 
@@ -112,6 +106,12 @@ public sealed class PointTable
     public long IdOf(int i) => _ids is null ? i : _ids[i];
 
     /// <summary>
+    /// The background medium's box, density and pressure when the table holds background points (layer
+    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
+    /// </summary>
+    public Bodies.Background.BackgroundBox? Background { get; set; }
+
+    /// <summary>
     /// Asserts the invariants: the point set's own (<see cref="PointSet.CheckValidity"/>), and every column
     /// still has <see cref="Count"/> values per component (arrays may not be swapped after adding).
     /// </summary>
@@ -120,9 +120,9 @@ public sealed class PointTable
     {
         Points.CheckValidity();
         foreach (var pointMass in PointMasses) pointMass.CheckValidity();
-        Background?.CheckValidity();
         if (_ids is not null && _ids.Length != Count)
             throw new InvalidOperationException($"Ids has {_ids.Length} values but the point set has {Count} points.");
+        Background?.CheckValidity();
         foreach (var column in _columns)
             for (int c = 0; c < column.ComponentCount; c++)
                 if (column.Components[c].Length != Count)

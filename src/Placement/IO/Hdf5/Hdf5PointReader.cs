@@ -93,6 +93,10 @@ public static class Hdf5PointReader
         datasets.Float64(PointColumnNames.TargetDensity, 1).CopyTo(points.TargetDensity, 0);
         datasets.Int32(PointColumnNames.Layer).CopyTo(points.Layer, 0);
         var table = new PointTable(points) { Ids = datasets.Int64(PointColumnNames.Id) };
+        if (root.LinkExists(Hdf5Layout.PointMassesGroup))
+            table.PointMasses.AddRange(Hdf5PointMasses.Read(path, root.Group(Hdf5Layout.PointMassesGroup)));
+        if (root.LinkExists(Hdf5Layout.BackgroundGroup))
+            table.Background = Hdf5Background.Read(path, root.Group(Hdf5Layout.BackgroundGroup));
 
         foreach (var child in group.Children())
         {
@@ -101,10 +105,6 @@ public static class Hdf5PointReader
                 throw new PointFileFormatException(path, $"'/{Hdf5Layout.PointsGroup}/{child.Name}' is not a dataset; only per-point datasets may live in '/{Hdf5Layout.PointsGroup}'.");
             table.Add(datasets.Column(child.Name));
         }
-        if (root.LinkExists(Hdf5Layout.PointMassesGroup))
-            table.PointMasses.AddRange(Hdf5PointMasses.Read(path, root.Group(Hdf5Layout.PointMassesGroup)));
-        if (root.LinkExists(Hdf5Layout.BackgroundGroup))
-            table.Background = Hdf5Background.Read(path, root.Group(Hdf5Layout.BackgroundGroup));
         return table;
     }
 

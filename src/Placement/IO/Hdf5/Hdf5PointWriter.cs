@@ -57,8 +57,6 @@ public static class Hdf5PointWriter
 
         var provenance = points.Provenance;
         var file = new H5File { [Hdf5Layout.PointsGroup] = group };
-        if (Hdf5PointMasses.Build(table) is { } pointMasses) file[Hdf5Layout.PointMassesGroup] = pointMasses;
-        if (Hdf5Background.Build(table) is { } background) file[Hdf5Layout.BackgroundGroup] = background;
         var a = file.Attributes;
         a[Hdf5Layout.FormatAttribute] = Hdf5Layout.FormatName;
         a[Hdf5Layout.FormatVersionAttribute] = Hdf5Layout.FormatVersion;
@@ -77,6 +75,8 @@ public static class Hdf5PointWriter
         a[Hdf5Layout.ProfileFingerprintAttribute] = provenance.ProfileFingerprint;
         a[Hdf5Layout.LibraryVersionAttribute] = provenance.LibraryVersion;
         a[Hdf5Layout.WriterAttribute] = "Placement " + LibraryInfo.Version;
+        if (Hdf5PointMasses.Build(table) is { } pointMasses) file[Hdf5Layout.PointMassesGroup] = pointMasses;
+        if (Hdf5Background.Build(table) is { } background) file[Hdf5Layout.BackgroundGroup] = background;
         return file;
     }
 
