@@ -50,6 +50,12 @@ public sealed class PointTable
     }
 
     /// <summary>
+    /// The background medium's box, density and pressure when the table holds background points (layer
+    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
+    /// </summary>
+    public Bodies.Background.BackgroundBox? Background { get; set; }
+
+    /// <summary>
     /// Point masses that travel with the points (a softened core, companions), in the point set's units; empty by
     /// default. Writers record them apart from the per-point columns (see docs/file-formats.md).
     /// </summary>
@@ -104,12 +110,6 @@ public sealed class PointTable
 
     /// <summary>The identifier of point <paramref name="i"/>: <see cref="Ids"/>[i], or i by default.</summary>
     public long IdOf(int i) => _ids is null ? i : _ids[i];
-
-    /// <summary>
-    /// The background medium's box, density and pressure when the table holds background points (layer
-    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
-    /// </summary>
-    public Bodies.Background.BackgroundBox? Background { get; set; }
 
     /// <summary>
     /// Asserts the invariants: the point set's own (<see cref="PointSet.CheckValidity"/>), and every column
