@@ -18,7 +18,8 @@ namespace Placement.Bodies;
 /// <para>The output table is new (the input's arrays are not changed): body points first, then background points.
 /// Columns: <c>velocity</c> (background at rest; created when companions need the gas to move), <c>cell_volume</c>
 /// (joint tessellation), <c>pressure</c> (added when there is a background and the profile carries pressure: the
-/// profile's pressure for body points, the background pressure for the medium); any other column needs
+/// profile's pressure for body points, the background pressure for the medium), <c>internal_energy</c> (when
+/// <see cref="BodyAssemblyRequest.BackgroundInternalEnergy"/> is given); any other column needs
 /// <see cref="BodyAssemblyRequest.BackgroundColumn"/>. With neither companions nor background nothing is shifted.</para>
 /// </remarks>
 public static class BodyAssembly
@@ -174,6 +175,12 @@ public static class BodyAssembly
         {
             var values = new double[bg.Points.Count];
             Array.Fill(values, bg.Settings.Pressure);
+            return values;
+        }
+        if (column.Name == PointColumnNames.InternalEnergy && column.ComponentCount == 1 && double.IsFinite(request.BackgroundInternalEnergy))
+        {
+            var values = new double[bg.Points.Count];
+            Array.Fill(values, request.BackgroundInternalEnergy);
             return values;
         }
         var given = request.BackgroundColumn?.Invoke(column, bg);

@@ -26,6 +26,13 @@ public sealed record BodyAssemblyRequest
     public ParallelSettings? Parallel { get; init; }
 
     /// <summary>
+    /// Specific internal energy of the background, length²/time² (e.g. P_bg/((γ − 1) ρ_bg) for an ideal gas): the value of
+    /// the <c>internal_energy</c> column at background points. NaN (default): not given, so a table with that column
+    /// needs <see cref="BackgroundColumn"/>.
+    /// </summary>
+    public double BackgroundInternalEnergy { get; init; } = double.NaN;
+
+    /// <summary>
     /// Values of extra per-point columns for the background points, for columns this class does not know (it knows
     /// <c>velocity</c>: at rest; <c>cell_volume</c>; <c>pressure</c>: the background pressure). Return null for an unknown
     /// column to make the assembly fail with a message naming it.

@@ -72,6 +72,21 @@ public class BodyAssemblyTests(ITestOutputHelper output)
         var ex = Assert.Throws<ArgumentException>(() => BodyAssembly.Assemble(body, profile,
             new BodyAssemblyRequest { Background = new BackgroundSettings { BoxSide = 4, Density = 1e-3 } }));
         Assert.Contains("temperature", ex.Message, StringComparison.Ordinal);
+        // A known column with a given background value, and an unknown one supplied through the callback.
+        var energy = new double[500];
+        Array.Fill(energy, 0.7);
+        body.Add(PointColumnNames.InternalEnergy, energy, QuantityDimension.SpecificEnergy, "invented");
+        var (table, summary) = BodyAssembly.Assemble(body, profile, new BodyAssemblyRequest
+        {
+            Background = new BackgroundSettings { BoxSide = 4, Density = 1e-3, Pressure = 2e-4 },
+            BackgroundInternalEnergy = 0.3, // P/((γ − 1) ρ) for γ = 5/3 (ideal gas, common practice)
+            BackgroundColumn = (column, bg) => column.Name == "temperature" ? [Enumerable.Repeat(10.0, bg.Points.Count).ToArray()] : null,
+        });
+        int n = table.Count;
+        Assert.Equal(0.7, table.Find(PointColumnNames.InternalEnergy)!.Components[0][0]);
+        Assert.Equal(0.3, table.Find(PointColumnNames.InternalEnergy)!.Components[0][n - 1]);
+        Assert.Equal(10.0, table.Find("temperature")!.Components[0][n - 1]);
+        Assert.Equal(500 + summary.Background!.Points, n);
         ex = Assert.Throws<ArgumentException>(() => BodyAssembly.Assemble(new PointTable(points), profile,
             new BodyAssemblyRequest { Companions = [new CompanionOrbit("b", 0.1, 3), new CompanionOrbit("b", 0.1, 5)] }));
         Assert.Contains("'b'", ex.Message, StringComparison.Ordinal);
