@@ -3,7 +3,12 @@ using Placement.Bodies;
 namespace Placement.Commands.Reports;
 
 /// <summary>The "body" section of the place report and summary: thermodynamics, resolution and energy budget (each null when not asked for).</summary>
-internal sealed record BodyReport(BodyThermodynamicsSection? Thermodynamics, BodyResolutionSection? Resolution, BodyEnergySection? Energy);
+internal sealed record BodyReport(BodyThermodynamicsSection? Thermodynamics, BodyResolutionSection? Resolution, BodyEnergySection? Energy)
+{
+    /// <summary>Per-point columns that carry a profile quantity: column name → quantity name (not reported; used to fill a background medium).</summary>
+    [System.Text.Json.Serialization.JsonIgnore]
+    public Dictionary<string, string> CarriedColumns { get; init; } = new(StringComparer.Ordinal);
+}
 
 /// <summary>How the points got their internal energy and what the match costs.</summary>
 /// <param name="Gamma">Adiabatic index.</param>

@@ -1,4 +1,5 @@
 using Placement.Bodies;
+using Placement.Bodies.Background;
 using Placement.Commands.Verbs;
 using Placement.IO;
 using Placement.Parallelism;
@@ -21,6 +22,7 @@ internal static class BodyRun
     {
         var points = table.Points;
         var units = points.Units;
+        var carriedColumns = new Dictionary<string, string>(StringComparer.Ordinal);
         double[]? volume = null, density = null;
         if (request.NeedsPointDensity)
             (volume, density) = context.Stage($"estimating point densities ({request.PointDensity})", _ => PointDensity(request.PointDensity, table, profile, parallel));
@@ -31,6 +33,7 @@ internal static class BodyRun
         {
             state = context.Stage("computing thermodynamic fields", _ => ThermodynamicFields.Compute(points, profile, options, density, parallel));
             var columns = new Dictionary<string, string>(StringComparer.Ordinal);
+            carriedColumns.Clear();
             var u = PointColumn.Scalar(PointColumnNames.InternalEnergy, state.InternalEnergy, QuantityDimension.SpecificEnergy, units,
                 $"specific internal energy, {MatchName(options.Match)}, gamma = {options.Gamma:R}");
             table.Add(u);
@@ -41,6 +44,7 @@ internal static class BodyRun
                 table.Add(new PointColumn(name, [carried.Values], carried.Quantity.Unit.Name, carried.Quantity.Unit.InCgs,
                     $"profile quantity '{carried.Quantity.Name}' at the point's radius"));
                 columns[name] = carried.Quantity.Unit.Name;
+                carriedColumns[name] = carried.Quantity.Name;
             }
             string source = options.Source == InternalEnergySource.IdealGas ? "ideal-gas" : "profile:" + state.InternalEnergyQuantity;
             thermoSection = new BodyThermodynamicsSection(options.Gamma, source, MatchName(options.Match), request.PointDensity, columns,
@@ -99,8 +103,30 @@ internal static class BodyRun
             }
             AddNumber(table, BodyNames.ProfileRotationalEnergy, budget.ProfileRotational, EnergyDimension, "1/2 int Omega^2 varpi^2 dm of the profile");
         }
-        return new BodyReport(thermoSection, resolutionSection, energySection);
+        return new BodyReport(thermoSection, resolutionSection, energySection) { CarriedColumns = carriedColumns };
     }
+
+    /// <summary>
+    /// Values of the body step's columns at background-medium points: the SPH density is the medium's density, the
+    /// kernel support holds <see cref="SphNeighbours"/> neighbours at that density in the point's own cell volume,
+    /// H = (3 N_H V/(4π))^(1/3), and a carried profile quantity (temperature, composition …) takes the body's surface
+    /// value, the profile's value just inside R. Any other column is unknown (null: the assembly names it).
+    /// </summary>
+    public static Func<PointColumn, BackgroundPoints, IReadOnlyList<double[]>?> BackgroundColumns(IRadialProfile profile, BodyReport? report) =>
+        (column, medium) =>
+        {
+            int n = medium.Points.Count;
+            if (column.ComponentCount != 1) return null;
+            var values = new double[n];
+            if (column.Name == PointColumnNames.SphDensity) Array.Fill(values, medium.Settings.Density);
+            else if (column.Name == PointColumnNames.SmoothingLength)
+                for (int i = 0; i < n; i++) values[i] = Math.Cbrt(3 * SphNeighbours * medium.CellVolume[i] / (4 * Math.PI));
+            else if (report is not null && report.CarriedColumns.TryGetValue(column.Name, out string? quantity)
+                && profile.TryQuantity(quantity, profile.OuterRadius * (1 - 1e-9), out double surface))
+                Array.Fill(values, surface);
+            else return null;
+            return [values];
+        };
 
     public static string MatchName(ThermodynamicMatch match) => match == ThermodynamicMatch.DensityEntropy ? "density+entropy" : "density+pressure";
 

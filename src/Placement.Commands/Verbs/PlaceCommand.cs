@@ -25,10 +25,10 @@ internal static class PlaceCommand
         var outputs = new OutputArguments();
         var core = new CoreReplacementArguments();
         var bodyOptions = new BodyArguments();
+        var systemArguments = new CompanionBackgroundArguments();
         var rotation = new Option<string?>("--rotation")
         {
-            Description = "Give the points a rotation velocity about the z axis: 'omega=W' (W in 1/time of the unit system) or "
-                + "'breakup=F' (F times the break-up rate sqrt(GM/R^3)); written as the 'velocity' column. Default: at rest (no column).",
+            Description = RotationArguments.Help,
         };
         var command = new Command("place", "Place points (SPH particles or mesh generators) for a profile and write them to a point file; optionally check them (--report, --plots).");
         profile.AddTo(command);
@@ -36,6 +36,7 @@ internal static class PlaceCommand
         command.Options.Add(output);
         command.Options.Add(rotation);
         core.AddTo(command, withWriteProfile: false);
+        systemArguments.AddTo(command);
         outputs.AddTo(command);
         bodyOptions.AddTo(command);
         command.SetAction(parse =>
@@ -59,13 +60,14 @@ internal static class PlaceCommand
                 throw new CliException(ExitCodes.Usage, "--no-check skips the quality check: it goes with --report and a body option (--gamma, --resolution, --energy), not with --plots.");
             var sampler = SamplerCatalogs.Create(context, parse.GetValue(sampling.Sampler)!);
             var request = sampling.Request(parse, body, sampler);
+            var assembly = systemArguments.Request(parse, request);
             var clock = Stopwatch.StartNew();
             var result = context.Stage($"placing {request.Count:N0} points with {sampler.Name}", _ => PointSampling.Place(sampler, request));
             double seconds = clock.Elapsed.TotalSeconds;
             result.Points.CheckValidity();
             var table = new PointTable(result.Points);
             if (replaced?.Core is { } pointMass) table.PointMasses.Add(pointMass);
-            if (request.Mode == SamplingMode.MeshGenerators)
+            if (request.Mode == SamplingMode.MeshGenerators && assembly?.Background is null)
             {
                 // Mesh generators: each point's mass becomes the profile mass of its own Voronoi cell (∫ρ dV by quadrature),
                 // so the set starts with the exact mass in every cell; the cell volumes go into the file too.
@@ -77,16 +79,30 @@ internal static class PlaceCommand
                 cells.Mass!.CopyTo(result.Points.Mass, 0);
                 table.Add(PointColumnNames.CellVolume, cells.Volume, QuantityDimension.Volume, "Voronoi cell volume (ball domain of the profile radius)");
             }
+            var notes = new List<string>(result.Plan.Notes);
             Func<double, double>? angularVelocity = null;
             if (parse.GetValue(rotation) is { } spec)
             {
-                double omega = RotationRate(spec, body);
-                angularVelocity = _ => omega;
-                var (vx, vy, vz) = Bodies.Rotation.Velocities(result.Points, _ => omega, null, request.Parallel);
-                table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units,
-                    string.Create(System.Globalization.CultureInfo.InvariantCulture, $"solid-body rotation about +z, Omega = {omega:R} per time unit")));
+                var (omega, description, note) = RotationArguments.Parse(spec, body);
+                angularVelocity = omega;
+                var (vx, vy, vz) = Bodies.Rotation.Velocities(result.Points, omega, null, request.Parallel);
+                table.Add(PointColumn.Vector(PointColumnNames.Velocity, vx, vy, vz, QuantityDimension.Velocity, result.Points.Units, description));
+                if (note is not null) notes.Add(note);
             }
             var bodyReport = bodyRequest is null ? null : BodyRun.Run(context, bodyRequest, table, body, request.Parallel!, angularVelocity);
+            Bodies.BodyAssemblySummary? added = null;
+            if (assembly is not null)
+            {
+                // The medium's own columns: u from the background pressure with the run's γ, SPH columns and carried
+                // profile quantities by the rule in BodyRun.
+                if (assembly.Background is { } medium)
+                    assembly = assembly with
+                    {
+                        BackgroundInternalEnergy = bodyRequest?.Thermodynamics is { } thermo ? medium.Pressure / ((thermo.Gamma - 1) * medium.Density) : double.NaN,
+                        BackgroundColumn = BodyRun.BackgroundColumns(body, bodyReport),
+                    };
+                (table, added) = CompanionBackgroundArguments.Assemble(context, table, body, assembly);
+            }
             context.Stage($"writing {path}", _ =>
             {
                 PointFiles.Write(table, path, replace);
@@ -102,16 +118,17 @@ internal static class PlaceCommand
                 BodyTables.WriteReport(context, reportPath, bodyReport, result.Points.Count, replace);
             var summary = new PlaceSummary(
                 path, sampler.Name, result.Points.Count, request.Count, request.Seed, result.Points.Units.Name,
-                result.Points.TotalMass(), body.TotalMass, seconds, result.Plan.Notes.ToArray(),
-                replaced is null ? null : CoreReplacementArguments.Json(replaced), bodyReport);
+                result.Points.TotalMass(), body.TotalMass, seconds, notes.ToArray(),
+                replaced is null ? null : CoreReplacementArguments.Json(replaced), bodyReport, added);
             if (context.Json) context.Output.WriteLine(JsonSerializer.Serialize(summary, CliJson.Options));
             else if (!context.Quiet)
             {
                 context.Output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"wrote {summary.Points:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
+                    $"wrote {table.Count:N0} points ({summary.Sampler}, seed {summary.Seed}) to {path} in {seconds:F2} s; total mass {summary.TotalMass:G10} of {summary.ProfileMass:G10} {result.Points.Units.MassUnitName}"));
                 foreach (string note in summary.Notes) context.Output.WriteLine($"note: {note}");
                 if (replaced is not null) foreach (string line in CoreReplacementArguments.Lines(replaced)) context.Output.WriteLine(line);
                 if (bodyReport is not null) BodyTables.Write(context.Console, bodyReport);
+                if (added is not null) foreach (string line in CompanionBackgroundArguments.Describe(added, result.Points.Units)) context.Output.WriteLine(line);
                 if (quality is not null) QualityTables.Write(context.Console, quality, $"quality of {sampler.Name}, N = {result.Points.Count:N0}");
             }
             return ExitCodes.Ok;
@@ -119,18 +136,8 @@ internal static class PlaceCommand
         return command;
     }
 
-    /// <summary>Parses 'omega=W' or 'breakup=F' into an angular velocity in 1/time units of the profile.</summary>
-    private static double RotationRate(string spec, Profiles.IRadialProfile body)
-    {
-        int eq = spec.IndexOf('=', StringComparison.Ordinal);
-        string key = eq > 0 ? spec[..eq].Trim().ToLowerInvariant() : "";
-        if (eq <= 0 || !double.TryParse(spec[(eq + 1)..], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double value)
-            || !double.IsFinite(value) || key is not ("omega" or "breakup"))
-            throw new CliException(ExitCodes.Usage, $"--rotation '{spec}' is not 'omega=<number>' or 'breakup=<fraction>'.");
-        return key == "omega" ? value : value * Bodies.Rotation.BreakupAngularVelocity(body);
-    }
-
     private sealed record PlaceSummary(
         string Output, string Sampler, int Points, int RequestedPoints, ulong Seed, string Units,
-        double TotalMass, double ProfileMass, double Seconds, string[] Notes, object? CoreReplacement, BodyReport? Body);
+        double TotalMass, double ProfileMass, double Seconds, string[] Notes, object? CoreReplacement, BodyReport? Body,
+        Bodies.BodyAssemblySummary? System);
 }

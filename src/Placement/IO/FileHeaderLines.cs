@@ -3,7 +3,9 @@ using Placement.IO.Hdf5;
 
 namespace Placement.IO;
 
-/// <summary>The key–value description (format, units, provenance) written as comment lines in text formats (CSV, VTK).</summary>
+/// <summary>The key–value description (format, units, provenance, point masses) written as comment lines in text formats (CSV, VTK).</summary>
+/// <remarks>Point masses: one <c>point_mass_columns</c> line naming the fields with their units, then one <c>point_mass</c>
+/// line per point mass holding a comma-separated row in that order (shortest round-trip numbers).</remarks>
 internal static class FileHeaderLines
 {
     /// <summary>Key–value pairs in a fixed order; values are single-line.</summary>
@@ -28,8 +30,21 @@ internal static class FileHeaderLines
             new("library_version", provenance.LibraryVersion),
             new("writer", "Placement " + LibraryInfo.Version),
         };
+        if (table.PointMasses.Count > 0)
+        {
+            string length = units.LengthUnitName, speed = QuantityDimension.Velocity.UnitName(units);
+            lines.Add(new("point_mass_columns",
+                $"name,mass [{units.MassUnitName}],softening_length [{length}],x [{length}],y [{length}],z [{length}],vx [{speed}],vy [{speed}],vz [{speed}]"));
+            foreach (var p in table.PointMasses)
+                lines.Add(new("point_mass", string.Join(',', p.Name, R(p.Mass), R(p.SofteningLength), R(p.X), R(p.Y), R(p.Z), R(p.Vx), R(p.Vy), R(p.Vz))));
+        }
+        if (table.Background is { } b)
+            lines.Add(new("background", string.Create(inv,
+                $"box [{R(b.MinX)}, {R(b.MaxX)}] x [{R(b.MinY)}, {R(b.MaxY)}] x [{R(b.MinZ)}, {R(b.MaxZ)}] {units.LengthUnitName}, periodic {(b.Periodic ? "yes" : "no")}, density {R(b.Density)} {units.DensityUnitName}, pressure {R(b.Pressure)} (mass/(length time^2) units), layer {Points.PointLayers.Background}")));
         for (int i = 0; i < lines.Count; i++)
             lines[i] = new(lines[i].Key, lines[i].Value.ReplaceLineEndings(" "));
         return lines;
     }
+
+    private static string R(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 }

@@ -50,6 +50,12 @@ public sealed class PointTable
     }
 
     /// <summary>
+    /// The background medium's box, density and pressure when the table holds background points (layer
+    /// <see cref="PointLayers.Background"/>), else null. Writers record it apart from the per-point columns.
+    /// </summary>
+    public Bodies.Background.BackgroundBox? Background { get; set; }
+
+    /// <summary>
     /// Point masses that travel with the points (a softened core, companions), in the point set's units; empty by
     /// default. Writers record them apart from the per-point columns (see docs/file-formats.md).
     /// </summary>
@@ -124,6 +130,7 @@ public sealed class PointTable
         CheckBodyValues();
         if (_ids is not null && _ids.Length != Count)
             throw new InvalidOperationException($"Ids has {_ids.Length} values but the point set has {Count} points.");
+        Background?.CheckValidity();
         foreach (var column in _columns)
             for (int c = 0; c < column.ComponentCount; c++)
                 if (column.Components[c].Length != Count)

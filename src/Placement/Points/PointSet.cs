@@ -9,7 +9,8 @@ namespace Placement.Points;
 /// Layout: <c>X[i], Y[i], Z[i]</c> are the position of point i (length units of <see cref="Units"/>);
 /// <c>Mass[i]</c> its mass (mass units; for mesh-generating points this may be filled later from cell
 /// volumes); <c>TargetDensity[i]</c> the profile density ρ(|x_i|) at the point (mass/length³);
-/// <c>Layer[i]</c> the shell or layer index the sampler put it in, or −1 where a sampler has no layers.
+/// <c>Layer[i]</c> the shell or layer index the sampler put it in, −1 where a sampler has no layers, −2 for points of a
+/// background medium around the body (<see cref="PointLayers"/>).
 /// All arrays have exactly <see cref="Count"/> elements. The arrays are exposed directly so hot loops can
 /// take spans of them; <see cref="CheckValidity"/> asserts the invariants.
 /// Memory: 5 × 8 + 4 = 44 bytes per point.
@@ -57,7 +58,7 @@ public sealed class PointSet
     /// <summary>Target density ρ(|x|) of the profile at each point, mass/length³.</summary>
     public double[] TargetDensity { get; }
 
-    /// <summary>Shell or layer index of each point, or −1 where the sampler has no layers.</summary>
+    /// <summary>Shell or layer index of each point, −1 where the sampler has no layers, −2 for background points (<see cref="PointLayers"/>).</summary>
     public int[] Layer { get; }
 
     /// <summary>What made this point set (sampler, parameters, seed, library version, profile fingerprint).</summary>
@@ -82,7 +83,7 @@ public sealed class PointSet
 
     /// <summary>
     /// Asserts the invariants: all coordinates finite, masses finite and ≥ 0, target densities finite and ≥ 0,
-    /// layers ≥ −1.
+    /// layers ≥ −2 (<see cref="PointLayers"/>).
     /// </summary>
     /// <exception cref="InvalidOperationException">An invariant is broken; the message names the point and field.</exception>
     public void CheckValidity()
@@ -95,8 +96,8 @@ public sealed class PointSet
                 throw new InvalidOperationException($"Point {i} has mass {Mass[i]}; expected finite and >= 0.");
             if (!(TargetDensity[i] >= 0) || !double.IsFinite(TargetDensity[i]))
                 throw new InvalidOperationException($"Point {i} has target density {TargetDensity[i]}; expected finite and >= 0.");
-            if (Layer[i] < -1)
-                throw new InvalidOperationException($"Point {i} has layer {Layer[i]}; expected >= -1.");
+            if (Layer[i] < PointLayers.Background)
+                throw new InvalidOperationException($"Point {i} has layer {Layer[i]}; expected >= {PointLayers.Background}.");
         }
     }
 }

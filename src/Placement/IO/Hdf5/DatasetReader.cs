@@ -2,8 +2,8 @@ using PureHDF;
 
 namespace Placement.IO.Hdf5;
 
-/// <summary>Reads the per-point datasets of <c>/points</c>, checking type and shape against N.</summary>
-internal sealed class DatasetReader(string path, IH5Group group, int n)
+/// <summary>Reads the datasets of one group (<c>/points</c> by default), checking type and shape against its row count N.</summary>
+internal sealed class DatasetReader(string path, IH5Group group, int n, string groupName = Hdf5Layout.PointsGroup)
 {
     public double[] Float64(string name, int components) =>
         Read<double>(Open(name, H5DataTypeClass.FloatingPoint, 8, components), name);
@@ -11,6 +11,29 @@ internal sealed class DatasetReader(string path, IH5Group group, int n)
     public int[] Int32(string name) => Read<int>(Open(name, H5DataTypeClass.FixedPoint, 4, 1), name);
 
     public long[] Int64(string name) => Read<long>(Open(name, H5DataTypeClass.FixedPoint, 8, 1), name);
+
+    /// <summary>Reads a one-dimensional dataset of N variable-length strings.</summary>
+    public string[] Strings(string name)
+    {
+        if (!group.LinkExists(name))
+            throw new PointFileFormatException(path, $"missing dataset '{Where(name)}'.");
+        if (group.Get(name) is not IH5Dataset dataset)
+            throw new PointFileFormatException(path, $"'{Where(name)}' is not a dataset.");
+        if (dataset.Type.Class is not (H5DataTypeClass.String or H5DataTypeClass.VariableLength))
+            throw new PointFileFormatException(path, $"dataset '{Where(name)}' has type {dataset.Type.Class}; expected strings.");
+        var dims = dataset.Space.Dimensions;
+        if (dims.Length != 1 || dims[0] != (ulong)n)
+            throw new PointFileFormatException(path, $"dataset '{Where(name)}' has shape ({string.Join(", ", dims)}); expected ({n}).");
+        if (n == 0) return [];
+        try
+        {
+            return dataset.Read<string[]>();
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            throw new PointFileFormatException(path, $"dataset '{Where(name)}' could not be read: {e.Message}", e);
+        }
+    }
 
     /// <summary>Reads an extra column: float64 of shape (N) or (N, k), with its unit attributes.</summary>
     public PointColumn Column(string name)
@@ -71,5 +94,5 @@ internal sealed class DatasetReader(string path, IH5Group group, int n)
         }
     }
 
-    private static string Where(string name) => "/" + Hdf5Layout.PointsGroup + "/" + name;
+    private string Where(string name) => "/" + groupName + "/" + name;
 }

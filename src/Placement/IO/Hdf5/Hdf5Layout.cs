@@ -10,6 +10,8 @@ namespace Placement.IO.Hdf5;
 /// /points/layer          int32   (N)     units = 1
 /// /points/id             int64   (N)     units = 1
 /// /points/NAME           float64 (N) or (N, k): extra columns
+/// /point_masses/         optional: name (k strings), mass, softening_length (k), position, velocity (k, 3)
+/// /background            optional, attributes only: box_min, box_max, periodic, density, pressure, layer
 /// </code>
 /// Every dataset has the attributes <c>units</c> (string), <c>cgs_factor</c> (float64, NaN if unknown) and
 /// <c>description</c> (string).
@@ -72,6 +74,12 @@ public static class Hdf5Layout
 
     /// <summary>Root attribute: name and version of the library that wrote the file.</summary>
     public const string WriterAttribute = "writer";
+
+    /// <summary>Optional group holding the point masses (cores, companions), one row per point mass; absent means none.</summary>
+    public const string PointMassesGroup = "point_masses";
+
+    /// <summary>Optional group whose attributes describe a background medium (box, density, pressure); absent means none.</summary>
+    public const string BackgroundGroup = "background";
 
     /// <summary>Group holding the per-point datasets.</summary>
     public const string PointsGroup = "points";

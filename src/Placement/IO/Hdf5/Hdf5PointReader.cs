@@ -10,7 +10,8 @@ namespace Placement.IO.Hdf5;
 /// Checks, in order: the file is HDF5; the root attribute <c>format</c> is <see cref="Hdf5Layout.FormatName"/>;
 /// the version is supported; the unit-system and provenance attributes are present; every core dataset exists
 /// with the right type and shape (N or (N, 3)) where N = <c>point_count</c>; every extra dataset in
-/// <c>/points</c> is float64 of shape (N) or (N, k) with a <c>units</c> attribute. Any failure raises a
+/// <c>/points</c> is float64 of shape (N) or (N, k) with a <c>units</c> attribute; the optional <c>/point_masses</c>
+/// group (absent: no point masses) has consistent datasets and valid entries. Any failure raises a
 /// <see cref="PointFileFormatException"/> naming the file and the object.
 /// </remarks>
 public static class Hdf5PointReader
@@ -92,6 +93,10 @@ public static class Hdf5PointReader
         datasets.Float64(PointColumnNames.TargetDensity, 1).CopyTo(points.TargetDensity, 0);
         datasets.Int32(PointColumnNames.Layer).CopyTo(points.Layer, 0);
         var table = new PointTable(points) { Ids = datasets.Int64(PointColumnNames.Id) };
+        if (root.LinkExists(Hdf5Layout.PointMassesGroup))
+            table.PointMasses.AddRange(Hdf5PointMasses.Read(path, root.Group(Hdf5Layout.PointMassesGroup)));
+        if (root.LinkExists(Hdf5Layout.BackgroundGroup))
+            table.Background = Hdf5Background.Read(path, root.Group(Hdf5Layout.BackgroundGroup));
 
         foreach (var child in group.Children())
         {

@@ -76,6 +76,8 @@ public static class Hdf5PointWriter
         a[Hdf5Layout.ProfileFingerprintAttribute] = provenance.ProfileFingerprint;
         a[Hdf5Layout.LibraryVersionAttribute] = provenance.LibraryVersion;
         a[Hdf5Layout.WriterAttribute] = "Placement " + LibraryInfo.Version;
+        if (Hdf5PointMasses.Build(table) is { } pointMasses) file[Hdf5Layout.PointMassesGroup] = pointMasses;
+        if (Hdf5Background.Build(table) is { } background) file[Hdf5Layout.BackgroundGroup] = background;
         return file;
     }
 
@@ -84,7 +86,7 @@ public static class Hdf5PointWriter
         JsonSerializer.Serialize(new SortedDictionary<string, string>(
             provenance.Parameters.ToDictionary(p => p.Key, p => p.Value), StringComparer.Ordinal));
 
-    private static H5Dataset Dataset(Array data, int n, int components, string unit, double cgsFactor, string description)
+    internal static H5Dataset Dataset(Array data, int n, int components, string unit, double cgsFactor, string description)
     {
         ulong[] dims = components == 1 ? [(ulong)n] : [(ulong)n, (ulong)components];
         return new H5Dataset(data, fileDims: dims)

@@ -20,10 +20,12 @@ internal sealed class VtkArrayWriter(TextWriter writer, VtkEncoding encoding)
     private long _valuesOnLine;
 
     /// <summary>Opens a DataArray of <paramref name="valueCount"/> values of <paramref name="vtkType"/> (size <paramref name="valueSize"/> bytes).</summary>
-    public void Begin(string vtkType, string? name, int components, long valueCount, int valueSize)
+    /// <remarks>Field-data arrays also state their tuple count (<paramref name="tuples"/> ≥ 0), as VTK XML field data requires.</remarks>
+    public void Begin(string vtkType, string? name, int components, long valueCount, int valueSize, long tuples = -1)
     {
         writer.Write($"        <DataArray type=\"{vtkType}\"");
         if (name is not null) writer.Write($" Name=\"{name}\"");
+        if (tuples >= 0) writer.Write($" NumberOfTuples=\"{tuples.ToString(CultureInfo.InvariantCulture)}\"");
         if (components != 1) writer.Write($" NumberOfComponents=\"{components.ToString(CultureInfo.InvariantCulture)}\"");
         writer.Write(encoding == VtkEncoding.Ascii ? " format=\"ascii\">\n" : " format=\"binary\">\n");
         _pendingCount = 0;

@@ -52,6 +52,7 @@ public static class VtkPointWriter
         string byteOrder = BitConverter.IsLittleEndian ? "LittleEndian" : "BigEndian";
         w.Write($"<VTKFile type=\"UnstructuredGrid\" version=\"1.0\" byte_order=\"{byteOrder}\" header_type=\"UInt64\">\n");
         w.Write("  <UnstructuredGrid>\n");
+        WritePointMasses(arrays, w, table);
         w.Write($"    <Piece NumberOfPoints=\"{n}\" NumberOfCells=\"{n}\">\n");
 
         w.Write("      <PointData Scalars=\"mass\">\n");
@@ -87,6 +88,9 @@ public static class VtkPointWriter
         var u = table.Points.Units;
         text.Append($"  units: position [{u.LengthUnitName}], mass [{u.MassUnitName}], target_density [{u.DensityUnitName}], id [1], layer [1]");
         foreach (var column in table.Columns) text.Append($", {column.Name} [{column.Unit}]");
+        if (table.PointMasses.Count > 0)
+            text.Append($", field data point_mass_mass [{u.MassUnitName}], point_mass_softening_length [{u.LengthUnitName}], "
+                + $"point_mass_position [{u.LengthUnitName}], point_mass_velocity [{QuantityDimension.Velocity.UnitName(u)}] (rows as in point_mass lines)");
         text.Append("\n  cells: one VTK_VERTEX per point\n");
         // "--" may not appear inside an XML comment (XML 1.0, section 2.5).
         w.Write("<!--\n");
@@ -94,6 +98,41 @@ public static class VtkPointWriter
         while (body.Contains("--", StringComparison.Ordinal)) body = body.Replace("--", "- -", StringComparison.Ordinal);
         w.Write(body);
         w.Write("-->\n");
+    }
+
+    /// <summary>Point masses as VTK field data (one tuple per point mass); their names are in the header comment.</summary>
+    private static void WritePointMasses(VtkArrayWriter arrays, StreamWriter w, PointTable table)
+    {
+        var list = table.PointMasses;
+        int k = list.Count;
+        if (k == 0) return;
+        var mass = new double[k];
+        var soft = new double[k];
+        var position = new double[3][];
+        var velocity = new double[3][];
+        for (int c = 0; c < 3; c++) { position[c] = new double[k]; velocity[c] = new double[k]; }
+        for (int i = 0; i < k; i++)
+        {
+            var p = list[i];
+            mass[i] = p.Mass; soft[i] = p.SofteningLength;
+            position[0][i] = p.X; position[1][i] = p.Y; position[2][i] = p.Z;
+            velocity[0][i] = p.Vx; velocity[1][i] = p.Vy; velocity[2][i] = p.Vz;
+        }
+        w.Write("    <FieldData>\n");
+        WriteField(arrays, "point_mass_mass", [mass]);
+        WriteField(arrays, "point_mass_softening_length", [soft]);
+        WriteField(arrays, "point_mass_position", position);
+        WriteField(arrays, "point_mass_velocity", velocity);
+        w.Write("    </FieldData>\n");
+    }
+
+    private static void WriteField(VtkArrayWriter arrays, string name, double[][] components)
+    {
+        int k = components[0].Length, n = components.Length;
+        var flat = n == 1 ? components[0] : Hdf5.Hdf5PointWriter.Interleave(components);
+        arrays.Begin("Float64", name, n, (long)k * n, sizeof(double), tuples: k);
+        arrays.Append<double>(flat);
+        arrays.End();
     }
 
     private static void WriteIds(VtkArrayWriter arrays, PointTable table)
