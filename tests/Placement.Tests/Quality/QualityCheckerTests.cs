@@ -134,6 +134,9 @@ public class QualityCheckerTests
                 + split.SurfaceCells * (split.SurfaceStandardDeviation * split.SurfaceStandardDeviation + Math.Pow(split.SurfaceMean - mean, 2)))
                 / report.LogRatio.Count;
             Assert.Equal(report.LogRatio.StandardDeviation, Math.Sqrt(pooled), 10);
+            // The cut cells are the outermost layer: a minority of the cells.
+            Assert.True(split.CutCells > 0 && split.CutCells < report.LogRatio.Count / 2);
+            Assert.True(double.IsFinite(split.CutMean) && double.IsFinite(split.UncutStandardDeviation));
         }
         Assert.Equal("sph", withSph.LogRatioByRegion.SupportSource);
         Assert.Equal("target", withoutSph.LogRatioByRegion.SupportSource);
