@@ -25,8 +25,12 @@ namespace Placement.Relaxation;
 /// <para>Outer surface: the cells tile the ball of the profile radius R. Cells cut by it are left out of the residual:
 /// where the density falls steeply to the surface, ρ_target at a generator differs from its cell's mean density by a
 /// factor of order one and the cut cells must absorb whatever volume the interior leaves inside R (Σ V_i = (4/3)πR³),
-/// so they are free; they still take Lloyd steps and the rank stretch keeps their radii at their mass fractions. The
-/// quality report gives body and surface statistics apart.</para>
+/// so they are free; they still take Lloyd steps and keep their radii (or mass-fraction radii). The quality report gives
+/// body, surface and cut cells apart. Limit: for ρ ∝ (R − r)^k at the surface, a layer of cells reaching R whose
+/// generators sit at the layer's mass midpoint has ρ(r_i)/ρ̄_layer = (k + 1) 2^(−k/(k+1)) in the planar limit, i.e.
+/// ln(Vρ/m) ≈ +0.50 for k = 3/2 and +0.87 for k = 3 [computed]; with the enclosed mass held exact at that radius no
+/// step removes it, so the overall std ln(Vρ/m) stays near √f·Δ (f the fraction of cut cells, Δ that offset) whatever
+/// the interior reaches.</para>
 /// <para>Safeguard: a step that raises the rms residual of the targeted cells is undone and the next step's length
 /// halved (the factor grows back by 1.5 after each accepted step), so the result is never worse than the start by that measure.</para>
 /// <para>Radii (<see cref="VoronoiRelaxationSettings.Radial"/>): with <see cref="RadialConstraint.KeepRadii"/> every step is
