@@ -212,6 +212,8 @@ public class VoronoiRelaxedSamplerTests
         var plan = Assert.IsType<Placement.Samplers.Relaxed.VoronoiRelaxedPlan>(result.Plan);
         Assert.Equal(3, plan.History.Iterations);
         Assert.Contains("healpix-shells", plan.Notes[0]);
+        // The second note lists one overall/interior pair per history entry.
+        Assert.Equal(plan.History.LogRatioStd.Length, plan.Notes[1].Split(' ').Count(t => t.Length > 0 && char.IsDigit(t[0]) && t.Contains('/', StringComparison.Ordinal)));
         Assert.Equal("voronoi-relaxed", result.Points.Provenance.Sampler);
     }
 }

@@ -13,7 +13,7 @@ namespace Placement.Samplers.Relaxed;
 /// <c>radial=auto</c> (default) shell starts keep their radii and other starts are rank-stretched. With
 /// <c>radial=keep</c> every point keeps its starting radius (shell starts keep their exact shell masses); with
 /// <c>radial=rank-stretch</c> the radii are reset to the mass quantiles after every step. The plan carries the
-/// convergence history and a note with its first and last values.
+/// convergence history and two notes: its first and last values, and the std ln(Vρ/m) of every iteration.
 /// </remarks>
 public sealed class VoronoiRelaxedSampler : IPointSampler
 {
@@ -65,6 +65,11 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
         bool any = history.LogRatioStd.Length > 0;
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
             $"{start.Name} start relaxed on its Voronoi cells for {history.Iterations} iterations: std ln(Vρ/m) {(any ? history.LogRatioStd[0] : double.NaN):G3} → {(any ? history.LogRatioStd[^1] : double.NaN):G3} overall, {(any ? history.InteriorLogRatioStd[0] : double.NaN):G3} → {(any ? history.InteriorLogRatioStd[^1] : double.NaN):G3} in cells not cut by the surface; {(history.Converged ? "converged" : "iteration limit reached")}."));
+        // The whole convergence history as a note, so `place --json` and the console carry it for plotting.
+        var steps = new System.Text.StringBuilder("history per iteration, std ln(Vρ/m) overall / cells not cut by the surface (* = step undone):");
+        for (int k = 0; k < history.LogRatioStd.Length; k++)
+            steps.Append(CultureInfo.InvariantCulture, $" {history.LogRatioStd[k]:G4}/{history.InteriorLogRatioStd[k]:G4}{(history.Undone[k] ? "*" : "")}");
+        plan.Notes.Add(steps.ToString());
         return plan;
     }
 
