@@ -16,6 +16,12 @@ internal static class QualityTables
         void Row(string name, Func<QualityReport, double> value, string format, string meaning) =>
             table.AddRow(name, value(report).ToString(format, C), b is null ? "" : value(b).ToString(format, C), Markup.Escape(meaning));
         Row("std ln(Vρ/m)", r => r.LogRatio.StandardDeviation, "F4", "cell-volume scatter (0 = every cell holds its mass)");
+        Row("std ln(Vρ/m) body", r => r.LogRatioByRegion.BodyStandardDeviation, "F4",
+            string.Create(C, $"cells whose kernel support (N_H = {report.LogRatioByRegion.NeighbourNumber:G3}) lies inside the body"));
+        Row("std ln(Vρ/m) surface", r => r.LogRatioByRegion.SurfaceStandardDeviation, "F4", "cells within a kernel support of the surface");
+        Row("std ln(Vρ/m) not cut", r => r.LogRatioByRegion.UncutStandardDeviation, "F4", "cells not cut by the domain boundary");
+        Row("mean ln(Vρ/m) cut", r => r.LogRatioByRegion.CutMean, "F4",
+            string.Create(C, $"the {report.LogRatioByRegion.CutCells} outermost cells, cut by the boundary"));
         Row("mean ln(Vρ/m)", r => r.LogRatio.Mean, "F4", "bias of cell volumes");
         Row("p1 / p99 ln(Vρ/m)", r => r.LogRatio.PercentileValues[^1] - r.LogRatio.PercentileValues[0], "F4", "width of the 1-99 % range");
         Row("radial density rms", r => r.RadialDensity.RmsError, "P2", "Voronoi vs target density, equal-mass bins");

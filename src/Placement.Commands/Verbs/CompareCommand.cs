@@ -56,7 +56,9 @@ internal static class CompareCommand
                 var report = context.Stage($"{name}: tessellating and SPH densities", _ => QualityChecker.Evaluate(placed.Points, body,
                     options: QualityOptions.Default with { KeepPerPointValues = false, SphNeighbourNumber = nh }));
                 double sphRms = report.Sph?.BodyRmsError ?? double.NaN, sphBias = report.Sph?.BodyBias ?? double.NaN;
-                rows.Add(new CompareRow(name, placed.Points.Count, seconds, report.LogRatio.StandardDeviation, report.RadialDensity.RmsError,
+                rows.Add(new CompareRow(name, placed.Points.Count, seconds, report.LogRatio.StandardDeviation,
+                    report.LogRatioByRegion.BodyStandardDeviation, report.LogRatioByRegion.SurfaceStandardDeviation,
+                    report.LogRatioByRegion.UncutStandardDeviation, report.RadialDensity.RmsError,
                     report.EnclosedMass.MaxRelativeError, report.Regularity.FractionCorrected, sphBias, sphRms));
             }
             if (context.Json)
@@ -66,18 +68,21 @@ internal static class CompareCommand
             }
             var c = CultureInfo.InvariantCulture;
             var table = new Table().Title(Markup.Escape($"{names.Count} samplers, N = {parse.GetValue(sampling.Count):N0}, seed {parse.GetValue(sampling.Seed)}"))
-                .AddColumns("sampler", "N", "place (s)", "std ln(Vρ/m)", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms");
+                .AddColumns("sampler", "N", "place (s)", "std ln(Vρ/m)", "body", "surface", "not cut", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms");
             foreach (var r in rows)
                 table.AddRow(r.Sampler, r.Points.ToString("N0", c), r.PlaceSeconds.ToString("F3", c), r.LogRatioStd.ToString("F4", c),
+                    r.LogRatioStdBody.ToString("F4", c), r.LogRatioStdSurface.ToString("F4", c), r.LogRatioStdUncut.ToString("F4", c),
                     r.RadialDensityRms.ToString("P2", c), r.EnclosedMassMax.ToString("P3", c), r.FractionCorrected.ToString("P1", c),
                     double.IsNaN(r.SphBias) ? "-" : r.SphBias.ToString("+0.00%;-0.00%", c), double.IsNaN(r.SphRms) ? "-" : r.SphRms.ToString("P2", c));
             context.Console.Write(table);
+            context.Output.WriteLine("body / surface: std ln(Vρ/m) of the cells whose SPH kernel support lies inside the body / reaches the surface; not cut: every cell but the outermost layer cut by the boundary (the overall column keeps all).");
             context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the body (kernels cut by the surface read low by construction; see check --report).");
             return ExitCodes.Ok;
         });
         return command;
     }
 
-    private sealed record CompareRow(string Sampler, int Points, double PlaceSeconds, double LogRatioStd, double RadialDensityRms,
+    private sealed record CompareRow(string Sampler, int Points, double PlaceSeconds, double LogRatioStd, double LogRatioStdBody,
+        double LogRatioStdSurface, double LogRatioStdUncut, double RadialDensityRms,
         double EnclosedMassMax, double FractionCorrected, double SphBias, double SphRms);
 }

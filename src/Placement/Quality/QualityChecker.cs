@@ -83,16 +83,19 @@ public static class QualityChecker
             if (rho[i] > 0 && mass[i] > 0) logRatio[i] = Math.Log(cells.Volume[i] * rho[i] / mass[i]);
             else { logRatio[i] = double.NaN; outside++; }
         }
+        bool sphOn = options.SphNeighbourNumber > 0 && n > 1;
+        var sph = sphOn ? Sph.SphDensity.Compute(points, options.SphKernel, options.SphNeighbourNumber) : null;
         return new QualityReport(
             n, profile.Fingerprint, domain.ToString(), profile.Units.LengthUnitName, profile.Units.MassUnitName,
             usePointMasses ? "point masses" : "equal shares of the profile mass",
             outside,
             LogStatistics(logRatio, points, radius, cells, options.WorstCells),
+            SplitByRegion(logRatio, radius, rho, mass, profile.OuterRadius, sph, cells.CutByDomain),
             Histogram.Of(logRatio, -options.HistogramRange, options.HistogramRange, options.HistogramBins),
             RadialDensity(profile, radius, mass, cells, options.RadialBins),
             Enclosed(profile, radius, mass),
             Regularity(cells, options),
-            options.SphNeighbourNumber > 0 && n > 1 ? SphComparison(points, profile, radius, rho, options) : null,
+            sph is null ? null : SphComparison(sph, profile, radius, rho, options),
             options.KeepPerPointValues ? logRatio : null,
             null);
     }
@@ -197,9 +200,35 @@ public static class QualityChecker
         return new EnclosedMassComparison([.. r], [.. model], [.. points], [.. relative], maxTotal, maxRelative);
     }
 
-    private static SphDensityComparison SphComparison(PointSet points, IRadialProfile profile, double[] radius, double[] rho, QualityOptions options)
+    /// <summary>Neighbour number of the target supports that split body from surface when the SPH check is off.</summary>
+    private const double SplitNeighbourNumber = 64;
+
+    private static LogRatioSplit SplitByRegion(double[] logRatio, double[] radius, double[] rho, double[] mass, double outer,
+        Sph.SphDensityResult? sph, bool[] cut)
     {
-        var sph = Sph.SphDensity.Compute(points, options.SphKernel, options.SphNeighbourNumber);
+        double nh = sph?.NeighbourNumber ?? SplitNeighbourNumber;
+        double factor = 3.0 * nh / (4.0 * Math.PI);
+        double bodySum = 0, bodySum2 = 0, surfSum = 0, surfSum2 = 0, cutSum = 0, cutSum2 = 0, inSum = 0, inSum2 = 0;
+        int body = 0, surface = 0, cutCount = 0, inCount = 0;
+        for (int i = 0; i < radius.Length; i++)
+        {
+            double v = logRatio[i];
+            if (!double.IsFinite(v)) continue;
+            if (cut[i]) { cutSum += v; cutSum2 += v * v; cutCount++; }
+            else { inSum += v; inSum2 += v * v; inCount++; }
+            double h = sph is not null ? sph.Support[i] : Math.Cbrt(factor * mass[i] / rho[i]);
+            if (radius[i] + h < outer) { bodySum += v; bodySum2 += v * v; body++; }
+            else { surfSum += v; surfSum2 += v * v; surface++; }
+        }
+        static double Mean(double s, int c) => c > 0 ? s / c : double.NaN;
+        static double Std(double s, double s2, int c) => c > 0 ? Math.Sqrt(Math.Max(0, s2 / c - (s / c) * (s / c))) : double.NaN;
+        return new LogRatioSplit(sph is not null ? "sph" : "target", nh, body, Mean(bodySum, body), Std(bodySum, bodySum2, body),
+            surface, Mean(surfSum, surface), Std(surfSum, surfSum2, surface),
+            cutCount, Mean(cutSum, cutCount), Std(cutSum, cutSum2, cutCount), Std(inSum, inSum2, inCount));
+    }
+
+    private static SphDensityComparison SphComparison(Sph.SphDensityResult sph, IRadialProfile profile, double[] radius, double[] rho, QualityOptions options)
+    {
         int bins = options.RadialBins;
         var edges = EqualMassEdges(profile, bins);
         var sum = new double[bins]; var sum2 = new double[bins]; var count = new int[bins];

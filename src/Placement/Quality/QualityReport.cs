@@ -12,6 +12,7 @@ namespace Placement.Quality;
 /// <param name="MassSource">Where m_i came from: "point masses" or "equal shares of the profile mass".</param>
 /// <param name="CellsOutsideProfile">Cells whose generator lies where ρ_target = 0 (left out of the log statistics).</param>
 /// <param name="LogRatio">Distribution of ln(V ρ_target / m).</param>
+/// <param name="LogRatioByRegion">ln(V ρ_target / m) for the body and the surface layer apart (split as for the SPH check).</param>
 /// <param name="LogRatioHistogram">Histogram of ln(V ρ_target / m).</param>
 /// <param name="RadialDensity">Voronoi against target density in equal-mass bins.</param>
 /// <param name="EnclosedMass">Point mass inside r against M(r).</param>
@@ -28,6 +29,7 @@ public sealed record QualityReport(
     string MassSource,
     int CellsOutsideProfile,
     LogRatioStatistics LogRatio,
+    LogRatioSplit LogRatioByRegion,
     Histogram LogRatioHistogram,
     RadialDensityComparison RadialDensity,
     EnclosedMassComparison EnclosedMass,

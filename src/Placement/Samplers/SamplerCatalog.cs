@@ -29,6 +29,7 @@ public sealed class SamplerCatalog
         c.Register(() => new PoissonSampler());
         c.Register(() => new Glass.GlassSampler());
         c.Register(() => new Relaxed.RelaxedSampler());
+        c.Register(() => new Relaxed.VoronoiRelaxedSampler());
         return c;
     }
 

@@ -113,4 +113,36 @@ public class QualityCheckerTests
         Assert.Equal(report.LogRatio.Worst.Length, back.LogRatio.Worst.Length);
         Assert.Equal(report.LogRatio.Worst[0], back.LogRatio.Worst[0]);
     }
+
+    [Fact]
+    public void LogRatioSplit_PartitionsTheCells_AndCombinesToTheOverallStatistics()
+    {
+        var profile = new TruncatedPlummer(1.0, 0.25, 1.0);
+        var points = SampleProfile(profile, 4000, 97);
+        var withSph = QualityChecker.Evaluate(points, profile);
+        var withoutSph = QualityChecker.Evaluate(points, profile, options: QualityOptions.Default with { SphNeighbourNumber = 0 });
+        foreach (var report in new[] { withSph, withoutSph })
+        {
+            var split = report.LogRatioByRegion;
+            Assert.Equal(report.LogRatio.Count, split.BodyCells + split.SurfaceCells);
+            Assert.True(split.BodyCells > 0 && split.SurfaceCells > 0);
+            // The two regions' means, weighted by their counts, give the overall mean (exact identity, to rounding).
+            double mean = (split.BodyMean * split.BodyCells + split.SurfaceMean * split.SurfaceCells) / report.LogRatio.Count;
+            Assert.Equal(report.LogRatio.Mean, mean, 12);
+            // Pooled variance = within-region variances + between-region spread (exact identity, to rounding).
+            double pooled = (split.BodyCells * (split.BodyStandardDeviation * split.BodyStandardDeviation + Math.Pow(split.BodyMean - mean, 2))
+                + split.SurfaceCells * (split.SurfaceStandardDeviation * split.SurfaceStandardDeviation + Math.Pow(split.SurfaceMean - mean, 2)))
+                / report.LogRatio.Count;
+            Assert.Equal(report.LogRatio.StandardDeviation, Math.Sqrt(pooled), 10);
+            // The cut cells are the outermost layer: a minority of the cells.
+            Assert.True(split.CutCells > 0 && split.CutCells < report.LogRatio.Count / 2);
+            Assert.True(double.IsFinite(split.CutMean) && double.IsFinite(split.UncutStandardDeviation));
+        }
+        Assert.Equal("sph", withSph.LogRatioByRegion.SupportSource);
+        Assert.Equal("target", withoutSph.LogRatioByRegion.SupportSource);
+        // The SPH split uses exactly the SPH comparison's body set.
+        Assert.Equal(withSph.Sph!.BodyPoints, withSph.LogRatioByRegion.BodyCells);
+        var back = QualityJson.Deserialize(QualityJson.Serialize(withSph));
+        Assert.Equal(withSph.LogRatioByRegion, back.LogRatioByRegion);
+    }
 }

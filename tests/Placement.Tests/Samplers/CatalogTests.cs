@@ -27,7 +27,7 @@ public class CatalogTests
     public void Catalog_FindsBuiltInsCaseInsensitively_AndListsNamesOnUnknown()
     {
         var catalog = SamplerCatalog.CreateDefault();
-        Assert.Equal(["glass", "healpix-shells", "poisson", "random-shells", "relaxed", "stratified-shells", "stretched-lattice"], catalog.Names);
+        Assert.Equal(["glass", "healpix-shells", "poisson", "random-shells", "relaxed", "stratified-shells", "stretched-lattice", "voronoi-relaxed"], catalog.Names);
         Assert.Equal("healpix-shells", catalog.Create("HEALPix-Shells").Name);
         var e = Assert.Throws<KeyNotFoundException>(() => catalog.Create("no-such-sampler"));
         Assert.Contains("healpix-shells", e.Message, StringComparison.Ordinal);

@@ -31,7 +31,7 @@ public sealed class RelaxedSampler : IPointSampler
         "Any built-in start (HEALPix shells by default) relaxed toward the target density by kernel repulsion, enclosed mass kept exact by a rank stretch; equal masses.",
         [
             new(StartParameter, SamplerParameterKind.Choice, "healpix-shells", "", "Start sampler.",
-                ["healpix-shells", "random-shells", "stratified-shells", "stretched-lattice", "glass", "poisson"]),
+                RelaxationStart.Choices),
             new(IterationsParameter, SamplerParameterKind.Integer, "30", "steps", "Relaxation iterations.", minimum: 0, maximum: 100_000),
             new(NeighboursParameter, SamplerParameterKind.Real, "64", "", "Neighbour number N_H of the repulsion kernel (Wendland C2).", minimum: 8, maximum: 1000),
         ]);
@@ -41,14 +41,7 @@ public sealed class RelaxedSampler : IPointSampler
     {
         ArgumentNullException.ThrowIfNull(request);
         var values = request.ParametersFor(Describe());
-        var start = SamplerCatalog.CreateDefault().Create(values.GetChoice(StartParameter));
-        var startRequest = new SamplingRequest(request.Profile, request.Count)
-        {
-            Seed = request.Seed,
-            Mode = request.Mode,
-            Parallel = request.Parallel,
-        };
-        var placed = PointSampling.Place(start, startRequest).Points;
+        var placed = RelaxationStart.Place(request, values.GetChoice(StartParameter), out var start);
         var history = KernelRelaxation.Relax(placed, request.Profile, new RelaxationSettings
         {
             MaxIterations = values.GetInt32(IterationsParameter),
