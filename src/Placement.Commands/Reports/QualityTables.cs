@@ -37,6 +37,11 @@ internal static class QualityTables
             Row("SPH ρ bias (body)", r => r.Sph?.BodyBias ?? double.NaN, "P2", $"mean ρ_SPH/ρ - 1, {sph.Kernel}, N_H = {sph.NeighbourNumber:G3}");
             Row("SPH ρ rms (body)", r => r.Sph?.BodyRmsError ?? double.NaN, "P2", "rms of ρ_SPH/ρ - 1 where the kernel lies inside the body");
             Row("SPH ρ rms (surface)", r => r.Sph?.SurfaceRmsError ?? double.NaN, "P2", "kernels cut by the surface read low by construction");
+            if (!double.IsNaN(sph.BodySmoothedRmsError))
+            {
+                Row("SPH ρ rms vs ρ̃ (body)", r => r.Sph?.BodySmoothedRmsError ?? double.NaN, "P2", "against the target seen through the same kernel: placement noise without smoothing bias");
+                Row("SPH ρ rms vs ρ̃ (surface)", r => r.Sph?.SurfaceSmoothedRmsError ?? double.NaN, "P2", "ρ̃ truncates at the surface like the kernel sum");
+            }
         }
         console.Write(table);
     }

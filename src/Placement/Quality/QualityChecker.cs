@@ -231,28 +231,68 @@ public static class QualityChecker
     {
         int bins = options.RadialBins;
         var edges = EqualMassEdges(profile, bins);
-        var sum = new double[bins]; var sum2 = new double[bins]; var count = new int[bins];
-        double bodySum = 0, bodySum2 = 0, surfSum = 0, surfSum2 = 0;
-        int body = 0, surface = 0;
+        var target = new Moments(bins);
+        double[]? smoothed = options.SphSmoothedTarget ? Sph.KernelSmoothedProfile.Compute(profile, options.SphKernel, radius, sph.Support) : null;
+        var versusSmoothed = new Moments(bins);
         double big = profile.OuterRadius;
         for (int i = 0; i < radius.Length; i++)
         {
             if (!(rho[i] > 0)) continue;
-            double e = sph.Density[i] / rho[i] - 1;
             int k = BinOf(edges, radius[i]);
-            if (k >= 0 && k < bins) { sum[k] += e; sum2[k] += e * e; count[k]++; }
-            if (radius[i] + sph.Support[i] < big) { bodySum += e; bodySum2 += e * e; body++; }
-            else { surfSum += e; surfSum2 += e * e; surface++; }
+            bool body = radius[i] + sph.Support[i] < big;
+            target.Add(k, body, sph.Density[i] / rho[i] - 1);
+            if (smoothed is not null && smoothed[i] > 0) versusSmoothed.Add(k, body, sph.Density[i] / smoothed[i] - 1);
         }
-        var bias = new double[bins]; var scatter = new double[bins];
-        for (int k = 0; k < bins; k++)
+        var (bias, scatter) = target.PerBin();
+        return new SphDensityComparison(options.SphKernel.Name, options.SphNeighbourNumber, edges[..^1], edges[1..], bias, scatter, target.Count,
+            target.Body.N, target.Body.Mean, target.Body.Rms, target.Surface.N, target.Surface.Mean, target.Surface.Rms,
+            smoothed is null ? null : versusSmoothed.PerBin().Bias,
+            smoothed is null ? double.NaN : versusSmoothed.Body.Mean,
+            smoothed is null ? double.NaN : versusSmoothed.Body.Rms,
+            smoothed is null ? double.NaN : versusSmoothed.Surface.Rms);
+    }
+
+    /// <summary>Sums of e and e² per radial bin and over the body / surface points.</summary>
+    private sealed class Moments(int bins)
+    {
+        private readonly double[] _sum = new double[bins], _sum2 = new double[bins];
+
+        public int[] Count { get; } = new int[bins];
+
+        public Accumulator Body { get; } = new();
+
+        public Accumulator Surface { get; } = new();
+
+        public void Add(int bin, bool body, double e)
         {
-            bias[k] = count[k] > 0 ? sum[k] / count[k] : double.NaN;
-            scatter[k] = count[k] > 0 ? Math.Sqrt(Math.Max(0, sum2[k] / count[k] - bias[k] * bias[k])) : double.NaN;
+            if (bin >= 0 && bin < Count.Length) { _sum[bin] += e; _sum2[bin] += e * e; Count[bin]++; }
+            (body ? Body : Surface).Add(e);
         }
-        return new SphDensityComparison(options.SphKernel.Name, options.SphNeighbourNumber, edges[..^1], edges[1..], bias, scatter, count,
-            body, body > 0 ? bodySum / body : double.NaN, body > 0 ? Math.Sqrt(bodySum2 / body) : double.NaN,
-            surface, surface > 0 ? surfSum / surface : double.NaN, surface > 0 ? Math.Sqrt(surfSum2 / surface) : double.NaN);
+
+        public (double[] Bias, double[] Scatter) PerBin()
+        {
+            var bias = new double[Count.Length]; var scatter = new double[Count.Length];
+            for (int k = 0; k < Count.Length; k++)
+            {
+                bias[k] = Count[k] > 0 ? _sum[k] / Count[k] : double.NaN;
+                scatter[k] = Count[k] > 0 ? Math.Sqrt(Math.Max(0, _sum2[k] / Count[k] - bias[k] * bias[k])) : double.NaN;
+            }
+            return (bias, scatter);
+        }
+    }
+
+    /// <summary>Count, mean and rms of a stream of values (NaN when empty).</summary>
+    private sealed class Accumulator
+    {
+        private double _sum, _sum2;
+
+        public int N { get; private set; }
+
+        public double Mean => N > 0 ? _sum / N : double.NaN;
+
+        public double Rms => N > 0 ? Math.Sqrt(_sum2 / N) : double.NaN;
+
+        public void Add(double e) { _sum += e; _sum2 += e * e; N++; }
     }
 
     private static RegularityStatistics Regularity(VoronoiCells cells, QualityOptions options)

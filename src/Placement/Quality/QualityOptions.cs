@@ -42,6 +42,12 @@ public sealed record QualityOptions
     /// <summary>Kernel of the SPH density check. Default Wendland C2 (with the Dehnen–Aly self-contribution correction).</summary>
     public Sph.SphKernel SphKernel { get; init; } = Sph.SphKernel.WendlandC2;
 
+    /// <summary>
+    /// Also compare ρ_SPH with the target seen through the same kernel and support (<see cref="Sph.KernelSmoothedProfile"/>),
+    /// which separates the placement's noise from the kernel's smoothing bias; default true (576 density evaluations per point).
+    /// </summary>
+    public bool SphSmoothedTarget { get; init; } = true;
+
     /// <summary>Tessellation settings; defaults when null.</summary>
     public TessellationOptions? Tessellation { get; init; }
 

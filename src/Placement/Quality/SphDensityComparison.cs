@@ -19,6 +19,11 @@ namespace Placement.Quality;
 /// <param name="SurfacePoints">Points whose support crosses the surface.</param>
 /// <param name="SurfaceBias">Mean of ρ_SPH/ρ_target − 1 over the surface points.</param>
 /// <param name="SurfaceRmsError">rms of ρ_SPH/ρ_target − 1 over the surface points.</param>
+/// <param name="SmoothedBias">Mean of ρ_SPH/ρ̃ − 1 per bin, ρ̃ the target seen through the same kernel and support
+/// (<see cref="Sph.KernelSmoothedProfile"/>): the placement's own error without the kernel's smoothing bias; null when not computed.</param>
+/// <param name="BodySmoothedBias">Mean of ρ_SPH/ρ̃ − 1 over the body points (NaN when not computed).</param>
+/// <param name="BodySmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the body points (NaN when not computed).</param>
+/// <param name="SurfaceSmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the surface points, whose kernels ρ̃ truncates the same way (NaN when not computed).</param>
 public sealed record SphDensityComparison(
     string Kernel,
     double NeighbourNumber,
@@ -32,4 +37,8 @@ public sealed record SphDensityComparison(
     double BodyRmsError,
     int SurfacePoints,
     double SurfaceBias,
-    double SurfaceRmsError);
+    double SurfaceRmsError,
+    double[]? SmoothedBias = null,
+    double BodySmoothedBias = double.NaN,
+    double BodySmoothedRmsError = double.NaN,
+    double SurfaceSmoothedRmsError = double.NaN);
