@@ -55,10 +55,17 @@ internal static class CheckCommand
                     $"'{path}' is in '{table.Points.Units.Name}' units but the profile is in '{body.Units.Name}'; pass --units {table.Points.Units.Name}.");
             int t = parse.GetValue(threads);
             var parallel = new Parallelism.ParallelSettings { MaxDegreeOfParallelism = t <= 0 ? -1 : t };
-            var report = QualityRun.Evaluate(context, table.Points, body, !parse.GetValue(outputs.NoBaseline), parse.GetValue(seed), parallel);
-            QualityRun.WriteOutputs(context, report, table.Points, body, parse.GetValue(outputs.Report), parse.GetValue(outputs.Plots), parse.GetValue(outputs.Overwrite));
+            var placed = table.Points;
+            if (Bodies.PlacedBody.IsEmbedded(table))
+            {
+                // A file from `place --companion/--background`: measure the body alone, about its own centre.
+                placed = Bodies.PlacedBody.Of(table);
+                context.Info($"measuring the body's {placed.Count:N0} points about its own centre (background points and the centre-of-mass shift left out)");
+            }
+            var report = QualityRun.Evaluate(context, placed, body, !parse.GetValue(outputs.NoBaseline), parse.GetValue(seed), parallel);
+            QualityRun.WriteOutputs(context, report, placed, body, parse.GetValue(outputs.Report), parse.GetValue(outputs.Plots), parse.GetValue(outputs.Overwrite));
             if (context.Json) context.Output.WriteLine(QualityJson.Serialize(report with { PerPointLogRatio = null, Baseline = report.Baseline is null ? null : report.Baseline with { PerPointLogRatio = null } }));
-            else QualityTables.Write(context.Console, report, $"quality of {path}, N = {table.Count:N0}");
+            else QualityTables.Write(context.Console, report, $"quality of {path}, N = {placed.Count:N0}");
             return ExitCodes.Ok;
         });
         return command;

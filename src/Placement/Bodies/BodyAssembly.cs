@@ -153,6 +153,11 @@ public static class BodyAssembly
             shift = shift with { Vx = shift.Vx + pre.X, Vy = shift.Vy + pre.Y, Vz = shift.Vz + pre.Z };
         }
         var after = CentreOfMassFrame.Measure(all, vx, vy, vz, masses, request.Parallel);
+        // Where the profile's origin went, so a reader (e.g. `check`) can measure the body about its own centre again.
+        table.BodyScalars.RemoveAll(s => s.Name is BodyNames.BodyCentreX or BodyNames.BodyCentreY or BodyNames.BodyCentreZ);
+        table.BodyScalars.Add(BodyScalar.Of(BodyNames.BodyCentreX, -shift.X, QuantityDimension.LengthDimension, units, "x of the body's centre (the profile's origin) in this frame"));
+        table.BodyScalars.Add(BodyScalar.Of(BodyNames.BodyCentreY, -shift.Y, QuantityDimension.LengthDimension, units, "y of the body's centre (the profile's origin) in this frame"));
+        table.BodyScalars.Add(BodyScalar.Of(BodyNames.BodyCentreZ, -shift.Z, QuantityDimension.LengthDimension, units, "z of the body's centre (the profile's origin) in this frame"));
         table.PointMasses.AddRange(masses);
 
         BackgroundSummary? summary = null;

@@ -54,6 +54,15 @@ public static class BodyNames
     /// <summary>Potential energy ∫ Φ_core dm of the profile's gas in its softened central core's field (energy); only with a core.</summary>
     public const string ProfileCorePotentialEnergy = "profile_core_potential_energy";
 
+    /// <summary>x of the body's centre (the profile's origin) in the file's frame after a centre-of-mass shift (length).</summary>
+    public const string BodyCentreX = "body_centre_x";
+
+    /// <summary>y of the body's centre in the file's frame (length).</summary>
+    public const string BodyCentreY = "body_centre_y";
+
+    /// <summary>z of the body's centre in the file's frame (length).</summary>
+    public const string BodyCentreZ = "body_centre_z";
+
     /// <summary>Opening angle θ of the tree gravity, 0 for the exact sum (scalar, 1).</summary>
     public const string OpeningAngle = "tree_opening_angle";
 
