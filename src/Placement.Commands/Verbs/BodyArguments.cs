@@ -47,10 +47,10 @@ internal sealed class BodyArguments
             + "(your threshold; none is built in). Implies --resolution.",
     };
 
-    public Option<double> InnerRadius { get; } = new("--inner-radius")
+    public Option<double?> InnerRadius { get; } = new("--inner-radius")
     {
-        Description = "Leave points inside this radius (length units, e.g. a softened core radius) out of the resolution requirement.",
-        DefaultValueFactory = _ => 0.0,
+        Description = "Leave points inside this radius (length units) out of the resolution requirement. Default: the softening length "
+            + "of a core from --replace-core (Newtonian gravity starts there), else 0.",
     };
 
     public Option<bool> Energy { get; } = new("--energy")
@@ -124,7 +124,7 @@ internal sealed class BodyArguments
             if (threshold is { } k && (!(k > 0) || !double.IsFinite(k)))
                 throw new CliException(ExitCodes.Usage, $"--resolution-threshold must be a finite number > 0, got {k}.");
         }
-        double inner = parse.GetValue(InnerRadius);
+        double inner = parse.GetValue(InnerRadius) ?? (profile.CentralPointMass is { } core ? core.SofteningLength : 0.0);
         if (!(inner >= 0) || !(inner < profile.OuterRadius))
             throw new CliException(ExitCodes.Usage, $"--inner-radius must lie in [0, {profile.OuterRadius:G6}) (the profile radius), got {inner}.");
         double theta = parse.GetValue(OpeningAngle);
