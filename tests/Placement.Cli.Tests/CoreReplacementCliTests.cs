@@ -115,4 +115,21 @@ public sealed class CoreReplacementCliTests : IDisposable
         Assert.Contains("innermost", error);
         Assert.Contains("0.05", error);
     }
+
+    [Fact]
+    public void Place_ReplaceCore_StartsTheResolutionWindowAtTheSofteningLength_UnlessToldOtherwise()
+    {
+        // Item 6: points needed outside the softened core — inside h the core's gravity is not Newtonian.
+        double Inner(params string[] extra)
+        {
+            string[] args = ["place", "-p", "polytrope:n=3", "-n", "3000", "--replace-core", "radius=0.2,softening=0.15,index=1.5",
+                "--resolution-threshold", "3", "-o", Path.Combine(_dir, $"w{extra.Length}.h5"), "--json", "--quiet", .. extra];
+            var (code, output, error) = CliRunner.Run(args);
+            Assert.True(code == ExitCodes.Ok, error);
+            using var doc = System.Text.Json.JsonDocument.Parse(output);
+            return doc.RootElement.GetProperty("body").GetProperty("resolution").GetProperty("innerRadius").GetDouble();
+        }
+        Assert.Equal(0.15, Inner());
+        Assert.Equal(0.05, Inner("--inner-radius", "0.05"));
+    }
 }
