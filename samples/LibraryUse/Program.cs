@@ -1,4 +1,6 @@
 // Library use from C#: two invented bodies, a placement, the quality check and an HDF5 file.
+using Placement.Bodies;
+using Placement.Bodies.Background;
 using Placement.IO;
 using Placement.Profiles;
 using Placement.Quality;
@@ -29,3 +31,27 @@ foreach (var (name, body) in new[] { ("star", (IRadialProfile)star), ("planet", 
     File.WriteAllText(Path.Combine(output, $"{name}.report.json"), QualityJson.Serialize(report));
 }
 Console.WriteLine($"wrote {output}/star.h5, {output}/planet.h5 and their reports");
+
+// 4. A simulation-ready binary (invented scenario): the star's dense centre replaced by a softened core, internal
+//    energies for an ideal gas, its energy budget, a companion on an eccentric orbit and a low-density medium around both,
+//    everything in the centre-of-mass frame.
+var gas = CoreReplacement.Apply(star, new CoreReplacementOptions(0.2) { Index = 1.5 });
+var gasPoints = PointSampling.Place(catalog.Create("healpix-shells"), new SamplingRequest(gas, 20_000) { Seed = 7 }).Points;
+var thermo = new ThermodynamicOptions { Gamma = 5.0 / 3.0 };
+var state = ThermodynamicFields.Compute(gasPoints, gas, thermo);
+var budget = EnergyBudgets.Compute(gasPoints, gas, state.InternalEnergy, options: new EnergyBudgetOptions { Thermodynamics = thermo });
+Console.WriteLine($"core: {gas.CoreMass:G4} M_sun, softening {gas.SofteningLength:G3} R_sun; virial ratio of the points {budget.PointsVirialRatio:F4}, " +
+                  $"W off the profile's by {budget.GravitationalDeviation:P2}");
+var single = new PointTable(gasPoints);
+single.Add(PointColumnNames.InternalEnergy, state.InternalEnergy, QuantityDimension.SpecificEnergy, "ideal gas, gamma = 5/3");
+single.PointMasses.Add(gas.Core!);
+var (binary, summary) = BodyAssembly.Assemble(single, gas, new BodyAssemblyRequest
+{
+    Companions = [new CompanionOrbit("companion", Mass: 0.5, SemiMajorAxis: 3.0, Eccentricity: 0.2, SofteningLength: 0.05)],
+    Background = new BackgroundSettings { BoxSide = 12, Density = 1e-6, Pressure = 1e-8 },
+    BackgroundInternalEnergy = 1e-8 / ((5.0 / 3.0 - 1) * 1e-6),
+    Seed = 7,
+});
+PointFiles.Write(binary, Path.Combine(output, "binary.h5"), overwrite: true);
+Console.WriteLine($"binary: {binary.Count} points ({summary.Background?.Points ?? 0} in the medium), point masses " +
+                  $"{string.Join(", ", binary.PointMasses.Select(p => p.Name))}; wrote {output}/binary.h5");
