@@ -28,7 +28,7 @@ internal sealed class CellBuilder
     private int[] _bucketOf = new int[256];
     private readonly double _duplicate2;
     private readonly int[] _selfCodes = new int[6];
-    private double[] _faceArea = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
+    private double[] _faceArea = new double[64], _faceH = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
 
     /// <summary>A builder over a uniform grid (<paramref name="tree"/> null) or over a k-d tree (<paramref name="grid"/> null).</summary>
     public CellBuilder(PointGrid? grid, KdTree? tree, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
@@ -92,7 +92,7 @@ internal sealed class CellBuilder
         _first = true;
         ClipByShells(slot, self, gx, gy, gz);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
-        cell.BuildFaceRings();
+        cell.GroupFaceCorners();
         Measure(self, gx, gy, gz, faces);
     }
 
@@ -226,18 +226,22 @@ internal sealed class CellBuilder
         if (_faceArea.Length < planes)
         {
             int m = Math.Max(planes, 2 * _faceArea.Length);
-            _faceArea = new double[m]; _faceCx = new double[m]; _faceCy = new double[m]; _faceCz = new double[m];
+            _faceArea = new double[m]; _faceH = new double[m]; _faceCx = new double[m]; _faceCy = new double[m]; _faceCz = new double[m];
         }
         var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var dd = cell.D;
         var start = cell.RingStart; var ring = cell.Ring;
         var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
         double volume = 0, mx = 0, my = 0, mz = 0;
+        // Each face is ordered (OrderFace) and measured in the same pass; afterwards every ring is in place for the
+        // mass quadrature.
         for (int p = 0; p < planes; p++)
         {
             int s = start[p], e = start[p + 1];
             _faceArea[p] = 0;
             if (e - s < 3) continue;
-            double inv = 1.0 / Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
+            cell.OrderFace(p);
+            double norm = Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
+            double inv = 1.0 / norm;
             double ux = nx[p] * inv, uy = ny[p] * inv, uz = nz[p] * inv;
             int t0 = ring[s];
             double ax = vx[t0], ay = vy[t0], az = vz[t0];
@@ -263,6 +267,7 @@ internal sealed class CellBuilder
             volume += vf;
             mx += vf * fcx; my += vf * fcy; mz += vf * fcz;
             _faceArea[p] = area;
+            _faceH[p] = dd[p] / norm;
             _faceCx[p] = fcx; _faceCy[p] = fcy; _faceCz[p] = fcz;
         }
         // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
@@ -281,8 +286,7 @@ internal sealed class CellBuilder
             if (code < 0) cut = true;
             else
             {
-                double h = dd[p] / Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
-                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / h);
+                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / _faceH[p]);
             }
             faces?.Add(code, area);
         }

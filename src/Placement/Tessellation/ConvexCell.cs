@@ -125,39 +125,57 @@ internal sealed class ConvexCell
     }
 
     // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.
+    // Also notes whether a removed vertex is a farthest one (_farthestRemoved), so the rebuild knows if the maximum
+    // radius must be rescanned.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private int Classify(double nx, double ny, double nz, double limit)
     {
         int removed = 0, t = 0, count = _triCount;
         var rm = _removed;
         // Clear every word: triangles appended by the rebuild may land in words beyond the current count.
-        Array.Clear(rm);
+        for (int w = 0; w < rm.Length; w++) rm[w] = 0;
+        bool farthest = false;
         if (Vector256.IsHardwareAccelerated)
         {
             var vnx = Vector256.Create(nx); var vny = Vector256.Create(ny); var vnz = Vector256.Create(nz); var vl = Vector256.Create(limit);
+            var vmax = Vector256.Create(MaxRadiusSquared);
             ref double px = ref MemoryMarshal.GetArrayDataReference(_vx);
             ref double py = ref MemoryMarshal.GetArrayDataReference(_vy);
             ref double pz = ref MemoryMarshal.GetArrayDataReference(_vz);
-            for (; t + 4 <= count; t += 4)
+            ref double pr = ref MemoryMarshal.GetArrayDataReference(_vr2);
+            // Capacities are multiples of four (doubling from 128), so the last group reads whole vectors; lanes past
+            // the count hold stale values and are masked off.
+            for (; t < count; t += 4)
             {
                 var dot = vnx * Vector256.LoadUnsafe(ref px, (nuint)t) + vny * Vector256.LoadUnsafe(ref py, (nuint)t) + vnz * Vector256.LoadUnsafe(ref pz, (nuint)t);
                 uint bits = Vector256.GreaterThan(dot, vl).ExtractMostSignificantBits();
                 if (bits == 0) continue;
+                if (count - t < 4) bits &= (1u << (count - t)) - 1;
+                if (bits == 0) continue;
                 rm[t >> 6] |= (ulong)bits << (t & 63);
                 removed += BitOperations.PopCount(bits);
+                if ((Vector256.GreaterThanOrEqual(Vector256.LoadUnsafe(ref pr, (nuint)t), vmax).ExtractMostSignificantBits() & bits) != 0) farthest = true;
             }
         }
-        var vx = _vx; var vy = _vy; var vz = _vz;
-        for (; t < count; t++)
+        else
         {
-            if (nx * vx[t] + ny * vy[t] + nz * vz[t] > limit)
+            var vx = _vx; var vy = _vy; var vz = _vz; var vr2 = _vr2;
+            double max = MaxRadiusSquared;
+            for (; t < count; t++)
             {
-                rm[t >> 6] |= 1UL << (t & 63);
-                removed++;
+                if (nx * vx[t] + ny * vy[t] + nz * vz[t] > limit)
+                {
+                    rm[t >> 6] |= 1UL << (t & 63);
+                    removed++;
+                    if (vr2[t] >= max) farthest = true;
+                }
             }
         }
+        _farthestRemoved = farthest;
         return removed;
     }
+
+    private bool _farthestRemoved;
 
     // First removed slot at or after word `word` (advanced past empty words), or −1.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -197,11 +215,7 @@ internal sealed class ConvexCell
         // The farthest vertex survives unless it is among the removed ones; then the new maximum is the old one or
         // a new vertex, and the full rescan below is skipped.
         double oldMax = MaxRadiusSquared, newMax = 0;
-        bool farthestRemoved = false;
-        int removedWords = (_triCount + 63) >> 6;
-        for (int w = 0; w < removedWords && !farthestRemoved; w++)
-            for (ulong bits = _removed[w]; bits != 0; bits &= bits - 1)
-                if (_vr2[(w << 6) + BitOperations.TrailingZeroCount(bits)] >= oldMax) { farthestRemoved = true; break; }
+        bool farthestRemoved = _farthestRemoved;
         // Fill removed slots with the new triangles (x, next[x], p), append the rest.
         int slot = 0; // word cursor into _removed
         x = first;
@@ -342,8 +356,12 @@ internal sealed class ConvexCell
 
     public ReadOnlySpan<int> Ring => _ring.AsSpan(0, 3 * _triCount);
 
-    /// <summary>Orders the vertices (triangles) of every face; faces that vanished get an empty ring.</summary>
-    public void BuildFaceRings()
+    /// <summary>
+    /// Groups the triangle corners by plane: the first half of building the face rings. Each face's ring is in place
+    /// once <see cref="OrderFace"/> was called for its plane, so a caller orders and measures a face in one pass;
+    /// faces that vanished keep an empty ring.
+    /// </summary>
+    public void GroupFaceCorners()
     {
         int planes = _planeCount, corners = 3 * _triCount;
         if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
@@ -366,15 +384,19 @@ internal sealed class ConvexCell
             k = start[b] + fill[b]++; _entQ[k] = c; _entR[k] = a; _ring[k] = t;
             k = start[c] + fill[c]++; _entQ[k] = a; _entR[k] = b; _ring[k] = t;
         }
-        for (int p = 0; p < planes; p++)
-        {
-            int s = start[p], e = start[p + 1];
-            if (e - s < 3) continue;
-            for (int k = s; k < e; k++) { _succ[_entQ[k]] = _entR[k]; _triOf[_entQ[k]] = _ring[k]; }
-            // In triangle (p, q, r) the face p runs from neighbour q to neighbour r; follow r to the next triangle.
-            int q = _entQ[s];
-            for (int k = s; k < e; k++) { _ring[k] = _triOf[q]; q = _succ[q]; }
-        }
+    }
+
+    /// <summary>Orders face <paramref name="p"/>'s ring after <see cref="GroupFaceCorners"/>; faces with fewer than three corners are left as they are.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public void OrderFace(int p)
+    {
+        int s = _ringStart[p], e = _ringStart[p + 1];
+        if (e - s < 3) return;
+        var entQ = _entQ; var entR = _entR; var ring = _ring; var succ = _succ; var triOf = _triOf;
+        for (int k = s; k < e; k++) { succ[entQ[k]] = entR[k]; triOf[entQ[k]] = ring[k]; }
+        // In triangle (p, q, r) the face p runs from neighbour q to neighbour r; follow r to the next triangle.
+        int q = entQ[s];
+        for (int k = s; k < e; k++) { ring[k] = triOf[q]; q = succ[q]; }
     }
 
     private void GrowPlanes()
