@@ -44,7 +44,7 @@ public sealed record QualityOptions
 
     /// <summary>
     /// Also compare ρ_SPH with the target seen through the same kernel and support (<see cref="Sph.KernelSmoothedProfile"/>),
-    /// which separates the placement's noise from the kernel's smoothing bias; default true (576 density evaluations per point).
+    /// which separates the placement's noise from the kernel's smoothing bias; default true (288 density evaluations per point, about 1 s per 1e5 points on two cores; not computed for the Poisson baseline).
     /// </summary>
     public bool SphSmoothedTarget { get; init; } = true;
 
