@@ -77,8 +77,8 @@ internal static class CompareCommand
                     double.IsNaN(r.SphBias) ? "-" : r.SphBias.ToString("+0.00%;-0.00%", c), double.IsNaN(r.SphRms) ? "-" : r.SphRms.ToString("P2", c),
                     double.IsNaN(r.SphRmsSmoothed) ? "-" : r.SphRmsSmoothed.ToString("P2", c));
             context.Console.Write(table);
-            context.Output.WriteLine("body / surface: std ln(Vρ/m) of the cells whose SPH kernel support lies inside the body / reaches the surface; not cut: every cell but the outermost layer cut by the boundary (the overall column keeps all).");
-            context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the body (kernels cut by the surface read low by construction; see check --report); 'vs ρ̃' compares with the target seen through the same kernel and support, which removes the kernel's smoothing bias and leaves the placement's noise.");
+            context.Output.WriteLine("body / surface: std ln(Vρ/m) of the cells whose SPH kernel support lies inside / reaches past the outermost points (or the profile radius); not cut: every cell but the outermost layer cut by the boundary (the overall column keeps all).");
+            context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the outermost points (kernels cut by the edge read low by construction; see check --report); 'vs ρ̃' compares with the target seen through the same kernel and support, which removes the kernel's smoothing bias and leaves the placement's noise.");
             return ExitCodes.Ok;
         });
         return command;

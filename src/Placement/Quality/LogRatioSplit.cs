@@ -2,8 +2,8 @@ namespace Placement.Quality;
 
 /// <summary>
 /// ln(V_i ρ_target(r_i) / m_i) summarised separately for the body and the surface layer, split the same way as the
-/// SPH comparison: a cell belongs to the surface when the kernel support of its generator reaches the profile radius
-/// (|x_i| + H_i ≥ R).
+/// SPH comparison: a cell belongs to the surface when the kernel support of its generator reaches the edge of the point
+/// distribution (|x_i| + H_i ≥ R_edge, R_edge the smaller of the profile radius and the outermost point's radius).
 /// </summary>
 /// <remarks>
 /// H_i is the SPH support solved by the SPH check when it ran; otherwise the target support
@@ -16,16 +16,17 @@ namespace Placement.Quality;
 /// </remarks>
 /// <param name="SupportSource">"sph" when the SPH supports defined the split, "target" when the target supports did.</param>
 /// <param name="NeighbourNumber">N_H of the supports.</param>
-/// <param name="BodyCells">Cells in the body (|x| + H &lt; R, ρ_target &gt; 0).</param>
+/// <param name="BodyCells">Cells in the body (|x| + H &lt; R_edge, ρ_target &gt; 0).</param>
 /// <param name="BodyMean">Mean ln(Vρ/m) over the body cells (NaN when there is none).</param>
 /// <param name="BodyStandardDeviation">Standard deviation (population form) of ln(Vρ/m) over the body cells.</param>
-/// <param name="SurfaceCells">Cells in the surface layer (|x| + H ≥ R, ρ_target &gt; 0).</param>
+/// <param name="SurfaceCells">Cells in the surface layer (|x| + H ≥ R_edge, ρ_target &gt; 0).</param>
 /// <param name="SurfaceMean">Mean ln(Vρ/m) over the surface cells.</param>
 /// <param name="SurfaceStandardDeviation">Standard deviation of ln(Vρ/m) over the surface cells.</param>
 /// <param name="CutCells">Cells cut by the domain boundary (the outermost layer).</param>
 /// <param name="CutMean">Mean ln(Vρ/m) over the cut cells.</param>
 /// <param name="CutStandardDeviation">Standard deviation of ln(Vρ/m) over the cut cells.</param>
 /// <param name="UncutStandardDeviation">Standard deviation of ln(Vρ/m) over every other cell.</param>
+/// <param name="EdgeRadius">R_edge of the split, length units (NaN when not recorded).</param>
 public sealed record LogRatioSplit(
     string SupportSource,
     double NeighbourNumber,
@@ -38,4 +39,5 @@ public sealed record LogRatioSplit(
     int CutCells,
     double CutMean,
     double CutStandardDeviation,
-    double UncutStandardDeviation);
+    double UncutStandardDeviation,
+    double EdgeRadius = double.NaN);

@@ -84,6 +84,11 @@ public static class QualityChecker
             if (rho[i] > 0 && mass[i] > 0) logRatio[i] = Math.Log(cells.Volume[i] * rho[i] / mass[i]);
             else { logRatio[i] = double.NaN; outside++; }
         }
+        // The edge of the point distribution: a kernel that reaches past the outermost point sees vacuum there even when
+        // the profile goes on (a steep envelope holding less than one layer of points), so it splits body from surface.
+        double edge = 0;
+        for (int i = 0; i < n; i++) if (rho[i] > 0) edge = Math.Max(edge, radius[i]);
+        edge = Math.Min(edge, profile.OuterRadius);
         bool sphOn = options.SphNeighbourNumber > 0 && n > 1;
         var sph = sphOn ? Sph.SphDensity.Compute(points, options.SphKernel, options.SphNeighbourNumber) : null;
         return new QualityReport(
@@ -91,12 +96,12 @@ public static class QualityChecker
             usePointMasses ? "point masses" : "equal shares of the profile mass",
             outside,
             LogStatistics(logRatio, points, radius, cells, options.WorstCells),
-            SplitByRegion(logRatio, radius, rho, mass, profile.OuterRadius, sph, cells.CutByDomain),
+            SplitByRegion(logRatio, radius, rho, mass, edge, sph, cells.CutByDomain),
             Histogram.Of(logRatio, -options.HistogramRange, options.HistogramRange, options.HistogramBins),
             RadialDensity(profile, radius, mass, cells, options.RadialBins),
             Enclosed(profile, radius, mass),
             Regularity(cells, options),
-            sph is null ? null : SphComparison(sph, profile, radius, rho, options),
+            sph is null ? null : SphComparison(sph, profile, radius, rho, edge, options),
             options.KeepPerPointValues ? logRatio : null,
             null);
     }
@@ -225,17 +230,17 @@ public static class QualityChecker
         static double Std(double s, double s2, int c) => c > 0 ? Math.Sqrt(Math.Max(0, s2 / c - (s / c) * (s / c))) : double.NaN;
         return new LogRatioSplit(sph is not null ? "sph" : "target", nh, body, Mean(bodySum, body), Std(bodySum, bodySum2, body),
             surface, Mean(surfSum, surface), Std(surfSum, surfSum2, surface),
-            cutCount, Mean(cutSum, cutCount), Std(cutSum, cutSum2, cutCount), Std(inSum, inSum2, inCount));
+            cutCount, Mean(cutSum, cutCount), Std(cutSum, cutSum2, cutCount), Std(inSum, inSum2, inCount), outer);
     }
 
-    private static SphDensityComparison SphComparison(Sph.SphDensityResult sph, IRadialProfile profile, double[] radius, double[] rho, QualityOptions options)
+    private static SphDensityComparison SphComparison(Sph.SphDensityResult sph, IRadialProfile profile, double[] radius, double[] rho, double edge, QualityOptions options)
     {
         int bins = options.RadialBins;
         var edges = EqualMassEdges(profile, bins);
         var target = new Moments(bins);
         double[]? smoothed = options.SphSmoothedTarget ? Sph.KernelSmoothedProfile.Compute(profile, options.SphKernel, radius, sph.Support) : null;
         var versusSmoothed = new Moments(bins);
-        double big = profile.OuterRadius;
+        double big = edge;
         for (int i = 0; i < radius.Length; i++)
         {
             if (!(rho[i] > 0)) continue;
@@ -250,7 +255,8 @@ public static class QualityChecker
             smoothed is null ? null : versusSmoothed.PerBin().Bias,
             smoothed is null ? double.NaN : versusSmoothed.Body.Mean,
             smoothed is null ? double.NaN : versusSmoothed.Body.Rms,
-            smoothed is null ? double.NaN : versusSmoothed.Surface.Rms);
+            smoothed is null ? double.NaN : versusSmoothed.Surface.Rms,
+            edge);
     }
 
     /// <summary>Sums of e and e² per radial bin and over the body / surface points.</summary>

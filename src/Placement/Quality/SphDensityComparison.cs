@@ -3,8 +3,11 @@ namespace Placement.Quality;
 /// <summary>SPH kernel density against the target: bias and scatter of ρ_SPH/ρ_target per equal-mass radial bin.</summary>
 /// <remarks>
 /// ρ_SPH from <see cref="Sph.SphDensity.Compute"/> (self-consistent supports for the neighbour number). The "body" summary takes
-/// every point whose kernel support lies inside the profile radius (|x| + H &lt; R); the "surface" summary the rest,
-/// whose kernels are truncated by the surface and therefore read low by construction.
+/// every point whose kernel support lies inside the point distribution (|x| + H &lt; R_edge, with R_edge the smaller of the
+/// profile radius and the outermost point's radius); the "surface" summary the rest, whose kernels are truncated by
+/// the surface and therefore read low by construction. For a steep envelope that holds less than a layer of points the
+/// outermost points lie well inside R; measured from R the surface would then hold none of them, and the outermost
+/// layers of points (the "outermost shells"), whose kernels see vacuum beyond them, would count as body.
 /// </remarks>
 /// <param name="Kernel">Kernel name, e.g. <c>wendland-c2</c>.</param>
 /// <param name="NeighbourNumber">N_H the supports were solved for.</param>
@@ -24,6 +27,7 @@ namespace Placement.Quality;
 /// <param name="BodySmoothedBias">Mean of ρ_SPH/ρ̃ − 1 over the body points (NaN when not computed).</param>
 /// <param name="BodySmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the body points (NaN when not computed).</param>
 /// <param name="SurfaceSmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the surface points, whose kernels ρ̃ truncates the same way (NaN when not computed).</param>
+/// <param name="EdgeRadius">R_edge of the body/surface split, length units (NaN when not recorded).</param>
 public sealed record SphDensityComparison(
     string Kernel,
     double NeighbourNumber,
@@ -41,4 +45,5 @@ public sealed record SphDensityComparison(
     double[]? SmoothedBias = null,
     double BodySmoothedBias = double.NaN,
     double BodySmoothedRmsError = double.NaN,
-    double SurfaceSmoothedRmsError = double.NaN);
+    double SurfaceSmoothedRmsError = double.NaN,
+    double EdgeRadius = double.NaN);

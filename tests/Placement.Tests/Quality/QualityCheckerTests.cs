@@ -145,4 +145,34 @@ public class QualityCheckerTests
         var back = QualityJson.Deserialize(QualityJson.Serialize(withSph));
         Assert.Equal(withSph.LogRatioByRegion, back.LogRatioByRegion);
     }
+
+    [Fact]
+    public void BodySurfaceSplit_FollowsTheOutermostPoints_WhenASteepEnvelopeEndsWellInsideR()
+    {
+        // An n = 3 polytrope with 3000 HEALPix-shell points: the envelope beyond ~0.6 R holds less than one layer, so
+        // the outermost shell lies far inside R (checked below). Measured from R no kernel would reach the surface and
+        // the outermost shells, whose kernels see vacuum beyond them, would count as body.
+        var profile = new Polytrope(3, 1, 1);
+        var points = Placement.Samplers.PointSampling.Place(new Placement.Samplers.Shells.HealpixShellSampler(), new Placement.Samplers.SamplingRequest(profile, 3000)).Points;
+        var report = QualityChecker.Evaluate(points, profile, options: QualityOptions.Default with { SphSmoothedTarget = false });
+        double outermost = 0;
+        for (int i = 0; i < points.Count; i++) outermost = Math.Max(outermost, points.Radius(i));
+        Assert.True(outermost < 0.9 * profile.OuterRadius, $"outermost point at {outermost}");
+        var sph = report.Sph!;
+        Assert.Equal(outermost, sph.EdgeRadius, 15);
+        Assert.Equal(outermost, report.LogRatioByRegion.EdgeRadius, 15);
+        // Recount with the SPH supports of the same estimate: surface = kernel reaches past the outermost point.
+        var estimate = Placement.Sph.SphDensity.Compute(points, Placement.Sph.SphKernel.WendlandC2, QualityOptions.Default.SphNeighbourNumber);
+        int surface = 0, outerShell = 0;
+        for (int i = 0; i < points.Count; i++)
+        {
+            double r = points.Radius(i);
+            if (r + estimate.Support[i] >= outermost) surface++;
+            if (r >= outermost * (1 - 1e-9)) outerShell++;
+        }
+        Assert.Equal(surface, sph.SurfacePoints);
+        Assert.Equal(points.Count - surface, sph.BodyPoints);
+        Assert.True(sph.SurfacePoints >= outerShell && outerShell > 0);
+        Assert.True(sph.BodyPoints > 0);
+    }
 }
