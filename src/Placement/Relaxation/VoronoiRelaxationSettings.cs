@@ -11,9 +11,16 @@ public sealed record VoronoiRelaxationSettings
 
     /// <summary>
     /// Fraction of the way to the density-weighted centroid each generator moves per iteration (Lloyd part, 0 to 1;
-    /// default 0.3). The volume correction then cancels the Lloyd part's first-order change of the cell volumes.
+    /// default 0.9). The volume correction then cancels the Lloyd part's first-order change of the cell volumes.
     /// </summary>
-    public double LloydFraction { get; init; } = 0.3;
+    /// <remarks>
+    /// The volume correction is the minimum-norm step, blind to where the generator sits in its cell; the Lloyd part is
+    /// what keeps cells centred. Measured at N = 1e5 from HEALPix shells, 15 iterations (n = 3/2 and n = 3 polytropes, a
+    /// Hernquist cusp, the invented two-zone demo star), going from 0.3 to 0.9 cut the cells a moving-mesh code would
+    /// correct from 4.2 / 6.7 / 8.3 / 13.8 % to 0.45 / 2.7 / 3.6 / 8.1 % and the SPH noise against ρ̃ by 5–14 %, while the
+    /// body std ln(Vρ/m) rose from 0.013–0.014 to 0.017–0.018 (0.172 → 0.171 on the demo star).
+    /// </remarks>
+    public double LloydFraction { get; init; } = 0.9;
 
     /// <summary>Exponent p of the Lloyd weight w = ρ^p (default 5/3: generator density ∝ w^{3/5} = ρ in 3-D).</summary>
     public double LloydWeightExponent { get; init; } = 5.0 / 3.0;

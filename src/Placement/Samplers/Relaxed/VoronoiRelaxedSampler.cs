@@ -43,7 +43,7 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
                 RelaxationStart.Choices),
             new(IterationsParameter, SamplerParameterKind.Integer, "15", "steps", "Iteration limit.", minimum: 0, maximum: 10_000),
             new(ToleranceParameter, SamplerParameterKind.Real, "0.002", "", "Stop when the rms ln(V rho/m) of the cells inside the body falls below this.", minimum: 0, maximum: 1),
-            new(LloydParameter, SamplerParameterKind.Real, "0.3", "", "Fraction of the way to the rho^(5/3)-weighted centroid per step (0 = volume correction only).", minimum: 0, maximum: 1),
+            new(LloydParameter, SamplerParameterKind.Real, "0.9", "", "Fraction of the way to the rho^(5/3)-weighted centroid per step (0 = volume correction only).", minimum: 0, maximum: 1),
             new(RadialParameter, SamplerParameterKind.Choice, "auto", "", "keep: every point keeps its start radius; rank-stretch: radii reset to the mass quantiles after each step; auto: keep for shell starts, rank-stretch otherwise.",
                 ["auto", "keep", "rank-stretch"]),
         ]);
