@@ -22,7 +22,10 @@ namespace Placement.Relaxation;
 /// <para>Outer surface: a point near the surface has no neighbours outside and is pushed outward; after every step
 /// <see cref="RadialRankStretch"/> moves every point back along its direction to the radius enclosing (k + ½)/N of the
 /// mass, so the radial profile (and the enclosed mass, to half a point) stays exact while the repulsion only reorders
-/// points tangentially and locally. Points never leave [0, R].</para>
+/// points tangentially and locally. Points never leave [0, R]. With <see cref="RadialConstraint.KeepRadii"/> every step
+/// is projected on the sphere through the point and the point put back on its own radius instead: a shell start keeps
+/// its shells (exact shell masses, the outermost layer where the start put it) and only the tangential arrangement
+/// relaxes.</para>
 /// <para>All points move at once from the same state (Jacobi steps), computed in fixed chunks over a k-d tree, so
 /// the result is identical for any thread count. Cost per iteration: one tree build and one neighbour query per point.</para>
 /// </remarks>
@@ -62,6 +65,13 @@ public static class KernelRelaxation
         double[] gx0 = [], gy0 = [], gz0 = [], gv = [];
         double supportFactor = 3.0 * settings.NeighbourNumber / (4.0 * Math.PI);
         bool converged = false;
+        bool keepRadii = settings.KeepRadialMassExact && settings.Radial == RadialConstraint.KeepRadii;
+        double[]? startRadius = null;
+        if (keepRadii)
+        {
+            startRadius = new double[n];
+            for (int i = 0; i < n; i++) startRadius[i] = points.Radius(i);
+        }
         for (int iteration = 0; iteration < settings.MaxIterations; iteration++)
         {
             var clock = Stopwatch.StartNew();
@@ -123,6 +133,7 @@ public static class KernelRelaxation
                     }
                     lnS[i] = Math.Log(sum);
                     double sx = -beta * h * h * gx, sy = -beta * h * h * gy, sz = -beta * h * h * gz;
+                    if (keepRadii) SphericalSteps.Project(points.X[i], points.Y[i], points.Z[i], ref sx, ref sy, ref sz);
                     double spacing = Math.Cbrt(volume[i]);
                     double len = Math.Sqrt(sx * sx + sy * sy + sz * sz), cap = maxStep * spacing;
                     if (len > cap) { double c = cap / len; sx *= c; sy *= c; sz *= c; len = cap; }
@@ -141,7 +152,8 @@ public static class KernelRelaxation
                 points.Y[i] += dy[i];
                 points.Z[i] += dz[i];
             }
-            if (settings.KeepRadialMassExact) RadialRankStretch.Apply(profile, points.X, points.Y, points.Z);
+            if (keepRadii) SphericalSteps.BackToRadii(points.X, points.Y, points.Z, startRadius!, parallel);
+            else if (settings.KeepRadialMassExact) RadialRankStretch.Apply(profile, points.X, points.Y, points.Z);
             double rms = Math.Sqrt(sumStep / n);
             steps.Add(rms);
             scatter.Add(Math.Sqrt(var / n));

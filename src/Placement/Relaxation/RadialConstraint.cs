@@ -1,6 +1,6 @@
 namespace Placement.Relaxation;
 
-/// <summary>How <see cref="VoronoiRelaxation"/> keeps the radial mass distribution exact while generators move.</summary>
+/// <summary>How <see cref="VoronoiRelaxation"/> and <see cref="KernelRelaxation"/> keep the radial mass distribution exact while points move.</summary>
 public enum RadialConstraint
 {
     /// <summary>

@@ -23,6 +23,13 @@ public sealed record RelaxationSettings
     /// <summary>Largest step of one point in one iteration, in units of its local target spacing (default 0.1).</summary>
     public double MaxStepInSpacings { get; init; } = 0.1;
 
-    /// <summary>Re-apply the radial rank stretch after every step, so the enclosed mass stays exact (default true).</summary>
+    /// <summary>Hold the radial mass distribution exact while points move, by <see cref="Radial"/> (default true).</summary>
     public bool KeepRadialMassExact { get; init; } = true;
+
+    /// <summary>
+    /// How the enclosed mass is held exact when <see cref="KeepRadialMassExact"/> is set: a rank stretch after every
+    /// step (default), or every point kept on its starting radius (steps projected on its sphere), which keeps a shell
+    /// start's shells and their exact masses.
+    /// </summary>
+    public RadialConstraint Radial { get; init; } = RadialConstraint.RankStretch;
 }

@@ -111,7 +111,7 @@ public static class VoronoiRelaxation
             double rmsStep = Step(cells, geometry, x, y, z, w, settings, tangential, trust, parallel);
             trust = Math.Min(1, 1.5 * trust);
             if (settings.Radial == RadialConstraint.RankStretch) RadialRankStretch.Apply(profile, x, y, z);
-            else BackToRadii(x, y, z, w.Radius, parallel);
+            else SphericalSteps.BackToRadii(x, y, z, w.Radius, parallel);
             history.Add(std, interiorStd, maxAbs, rmsStep, clock.Elapsed.TotalSeconds, false);
             progress?.Report((iteration + 1.0) / Math.Max(1, settings.MaxIterations));
         }
@@ -181,7 +181,7 @@ public static class VoronoiRelaxation
             w.Lx[i] = alpha * (wcx[i] - x[i]);
             w.Ly[i] = alpha * (wcy[i] - y[i]);
             w.Lz[i] = alpha * (wcz[i] - z[i]);
-            if (tangential) Project(x[i], y[i], z[i], ref w.Lx[i], ref w.Ly[i], ref w.Lz[i]);
+            if (tangential) SphericalSteps.Project(x[i], y[i], z[i], ref w.Lx[i], ref w.Ly[i], ref w.Lz[i]);
         }
         // Right-hand side b = −(g + J L) on the targeted rows, and the Jacobi preconditioner diag(J Jᵀ).
         ApplyJ(geo, w.InvVolume, w.Lx, w.Ly, w.Lz, w.Q, parallel);
@@ -288,30 +288,8 @@ public static class VoronoiRelaxation
                     if (b == 0) continue;
                     sx += b * gx[g]; sy += b * gy[g]; sz += b * gz[g];
                 }
-                if (px is not null) Project(px[k], py![k], pz![k], ref sx, ref sy, ref sz);
+                if (px is not null) SphericalSteps.Project(px[k], py![k], pz![k], ref sx, ref sy, ref sz);
                 rx[k] = sx; ry[k] = sy; rz[k] = sz;
-            }
-        });
-    }
-
-    // Removes the radial component of (vx, vy, vz) at the point (x, y, z); nothing at the centre.
-    private static void Project(double x, double y, double z, ref double vx, ref double vy, ref double vz)
-    {
-        double r2 = x * x + y * y + z * z;
-        if (!(r2 > 0)) return;
-        double c = (vx * x + vy * y + vz * z) / r2;
-        vx -= c * x; vy -= c * y; vz -= c * z;
-    }
-
-    // Puts every point back on the sphere of its own radius (a tangential step moves it outward at second order).
-    private static void BackToRadii(double[] x, double[] y, double[] z, double[] radius, ParallelSettings? parallel)
-    {
-        ParallelLoop.For(x.Length, parallel, (s, e) =>
-        {
-            for (int i = s; i < e; i++)
-            {
-                double r = Math.Sqrt(x[i] * x[i] + y[i] * y[i] + z[i] * z[i]);
-                if (r > 0) { double c = radius[i] / r; x[i] *= c; y[i] *= c; z[i] *= c; }
             }
         });
     }

@@ -18,4 +18,12 @@ internal static class RelaxationStart
         };
         return PointSampling.Place(start, startRequest).Points;
     }
+
+    /// <summary>The radial constraint for a <c>radial</c> parameter value: keep, rank-stretch, or auto (keep for shell starts, whose shells carry exact masses).</summary>
+    public static Relaxation.RadialConstraint RadialConstraintFor(string choice, string start) => choice switch
+    {
+        "keep" => Relaxation.RadialConstraint.KeepRadii,
+        "rank-stretch" => Relaxation.RadialConstraint.RankStretch,
+        _ => start.EndsWith("shells", StringComparison.Ordinal) ? Relaxation.RadialConstraint.KeepRadii : Relaxation.RadialConstraint.RankStretch,
+    };
 }

@@ -23,6 +23,9 @@ public sealed class RelaxedSampler : IPointSampler
     /// <summary>Parameter: neighbour number of the repulsion kernel.</summary>
     public const string NeighboursParameter = "neighbours";
 
+    /// <summary>Parameter: how the enclosed mass is held exact (keep, rank-stretch, auto).</summary>
+    public const string RadialParameter = "radial";
+
     /// <inheritdoc />
     public string Name => "relaxed";
 
@@ -34,6 +37,8 @@ public sealed class RelaxedSampler : IPointSampler
                 RelaxationStart.Choices),
             new(IterationsParameter, SamplerParameterKind.Integer, "30", "steps", "Relaxation iterations.", minimum: 0, maximum: 100_000),
             new(NeighboursParameter, SamplerParameterKind.Real, "64", "", "Neighbour number N_H of the repulsion kernel (Wendland C2).", minimum: 8, maximum: 1000),
+            new(RadialParameter, SamplerParameterKind.Choice, "rank-stretch", "", "keep: every point keeps its start radius (shell starts keep their shells); rank-stretch: radii reset to the mass quantiles after each step; auto: keep for shell starts, rank-stretch otherwise.",
+                ["auto", "keep", "rank-stretch"]),
         ]);
 
     /// <inheritdoc />
@@ -46,6 +51,7 @@ public sealed class RelaxedSampler : IPointSampler
         {
             MaxIterations = values.GetInt32(IterationsParameter),
             NeighbourNumber = values.GetDouble(NeighboursParameter),
+            Radial = RelaxationStart.RadialConstraintFor(values.GetChoice(RadialParameter), start.Name),
         }, request.Parallel);
         var plan = new RelaxedPlan(placed.X, placed.Y, placed.Z, request.Profile.TotalMass / placed.Count, history);
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,

@@ -59,7 +59,7 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
             MaxIterations = values.GetInt32(IterationsParameter),
             Tolerance = values.GetDouble(ToleranceParameter),
             LloydFraction = values.GetDouble(LloydParameter),
-            Radial = Radial(values.GetChoice(RadialParameter), start.Name),
+            Radial = RelaxationStart.RadialConstraintFor(values.GetChoice(RadialParameter), start.Name),
         }, request.Parallel);
         var plan = new VoronoiRelaxedPlan(placed.X, placed.Y, placed.Z, request.Profile.TotalMass / placed.Count, history);
         bool any = history.LogRatioStd.Length > 0;
@@ -74,12 +74,7 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
     }
 
     // Shell starts carry exact shell masses, which kept radii preserve; other starts get exact quantiles from the rank stretch.
-    private static RadialConstraint Radial(string choice, string start) => choice switch
-    {
-        "keep" => RadialConstraint.KeepRadii,
-        "rank-stretch" => RadialConstraint.RankStretch,
-        _ => start.EndsWith("shells", StringComparison.Ordinal) ? RadialConstraint.KeepRadii : RadialConstraint.RankStretch,
-    };
+
 
     /// <inheritdoc />
     /// <exception cref="ArgumentException">The plan is not a <see cref="VoronoiRelaxedPlan"/>.</exception>
