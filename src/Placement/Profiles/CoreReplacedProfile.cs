@@ -58,6 +58,9 @@ public sealed class CoreReplacedProfile : IRadialProfile
     /// <summary>r_c, length units.</summary>
     public double CutRadius { get; }
 
+    /// <summary>The original profile's density steps outside the cut radius, length units.</summary>
+    public IReadOnlyList<double> DensitySteps => [.. _original.DensitySteps.Where(r => r > CutRadius)];
+
     /// <summary>m_c, mass units (0 when no core was needed).</summary>
     public double CoreMass { get; }
 

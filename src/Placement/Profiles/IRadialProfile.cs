@@ -51,6 +51,14 @@ public interface IRadialProfile
     }
 
     /// <summary>
+    /// Radii (length units) where the density jumps, such as composition changes in a layered body: ascending, strictly
+    /// inside (0, R). Empty by default (a profile without steps, or one that does not know them). Shell samplers put a
+    /// shell boundary on each, so no shell of points straddles a step.
+    /// </summary>
+    /// <remarks>Added as a default member so existing implementations need not change.</remarks>
+    IReadOnlyList<double> DensitySteps => [];
+
+    /// <summary>
     /// A softened point mass at the centre that the gas stands beside (the core left by core replacement), in this
     /// profile's units; null by default. It is not part of <see cref="TotalMass"/>.
     /// </summary>

@@ -104,6 +104,10 @@ public sealed partial class TabulatedProfile : IRadialProfile
         }
         OuterRadius = _r[^1];
         TotalMass = _pM0[^1];
+        var steps = new List<double>();
+        for (int i = 0; i + 1 < _r.Length; i++)
+            if (_r[i] == _r[i + 1] && _r[i] > 0 && _r[i] < OuterRadius && (steps.Count == 0 || steps[^1] != _r[i])) steps.Add(_r[i]);
+        DensitySteps = steps;
         Fingerprint = ComputeFingerprint();
     }
 
@@ -139,6 +143,9 @@ public sealed partial class TabulatedProfile : IRadialProfile
 
     /// <inheritdoc />
     public IReadOnlyList<ProfileQuantity> Quantities => _quantities;
+
+    /// <summary>The radii repeated on two consecutive rows (density steps), ascending, strictly inside (0, R); length units.</summary>
+    public IReadOnlyList<double> DensitySteps { get; }
 
     /// <inheritdoc />
     public double Density(double r) => r >= 0 && r <= OuterRadius ? _density.Evaluate(r) : 0.0;

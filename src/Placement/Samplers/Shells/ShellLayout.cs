@@ -15,9 +15,12 @@ namespace Placement.Samplers.Shells;
 /// midpoint radius r(m (C_{k−1} + 6N_k²)).</para>
 /// <para>N_side is chosen shell by shell from the centre outward so that the radial thickness over the tangential
 /// spacing, (r_k − r_{k−1}) / (r_mid √(π/3) / N_k), is closest to the target aspect (1 = cubic cells; from
-/// 4πr²Δr/N = Δr³). Only M(r) and r(M) are used, so steep envelopes, density steps and cusps need no special
-/// handling. The outward pass stops when the remaining mass cannot fill a shell of the target aspect; then the
-/// last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
+/// 4πr²Δr/N = Δr³). Only M(r) and r(M) are used, so steep envelopes and cusps need no special handling. Density
+/// steps (<see cref="IRadialProfile.DensitySteps"/>) split the body into segments that end on a shell boundary each: a
+/// shell straddling a step would put its points' cells across two densities (ln(Vρ/m) of order the log contrast for
+/// a whole shell). The step's boundary falls at the count c + 12j nearest to M(r_s)/m, so within six points' mass of
+/// the step. In each segment the outward pass stops when the remaining mass cannot fill a shell of the target
+/// aspect; then the last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
 /// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
 /// greedy value; a search over nearby integers finds such sums (more parts and wider windows are tried if the
 /// nearest fail; with five or more parts there is no number-theoretic obstruction). The outermost shell always
@@ -146,21 +149,102 @@ public sealed class ShellLayout
         public ShellLayout Run()
         {
             int c = count % 12;
-            long q = (count - c) / 12;
             var sides = new List<int>();
             long enclosed = c;
-            double rIn = RadiusAt(enclosed);
-            while (q > 0)
+            // Segments end at the density steps (each moved to the nearest count c + 12j, so whole shells fill it) and at
+            // the surface. Next to a step the two flanking shells get the same radial thickness, so their points sit
+            // symmetrically about it and the Voronoi boundary between them (the bisector) falls on the step; the rest of
+            // each segment is filled by the greedy pass and closed exactly by the tail search.
+            var ends = SegmentEnds(c);
+            for (int k = 0; k < ends.Count; k++)
             {
-                var (best, capped) = BestNSide(enclosed, rIn, q);
-                if (capped) break; // what is left cannot fill a shell of the target aspect
-                sides.Add(best);
-                enclosed += 12L * best * best;
-                q -= (long)best * best;
-                rIn = RadiusAt(enclosed);
+                var (end, _) = ends[k];
+                int first = k > 0 ? Flank(ends[k - 1].End, ends[k - 1].Step, outward: true) : 0;
+                int last = k < ends.Count - 1 ? Flank(end, ends[k].Step, outward: false) : 0;
+                if (12L * ((long)first * first + (long)last * last) >= end - enclosed) first = last = 0;
+                var segment = new List<int>();
+                if (first > 0) { segment.Add(first); enclosed += 12L * first * first; }
+                long fillEnd = end - 12L * last * last;
+                long q = (fillEnd - enclosed) / 12;
+                double rIn = RadiusAt(enclosed);
+                var fill = new List<int>();
+                while (q > 0)
+                {
+                    var (best, capped) = BestNSide(enclosed, rIn, q);
+                    if (capped) break; // what is left cannot fill a shell of the target aspect
+                    fill.Add(best);
+                    enclosed += 12L * best * best;
+                    q -= (long)best * best;
+                    rIn = RadiusAt(enclosed);
+                }
+                if (q > 0) FinishTail(fill, q);
+                segment.AddRange(fill);
+                if (last > 0) segment.Add(last);
+                sides.AddRange(segment);
+                enclosed = end;
             }
-            if (q > 0) FinishTail(sides, q);
             return Assemble(c, sides);
+        }
+
+        /// <summary>
+        /// N_side of the shell flanking the step at <paramref name="step"/> (boundary count <paramref name="boundary"/>)
+        /// on one side: radial thickness t = √(d_in d_out) (times a^{2/3} for a target aspect a), d = (m/ρ)^{1/3} the
+        /// cubic-cell spacing just inside and just outside the step, so both flanking shells have the same thickness
+        /// and aspects (d_out/d_in)^{±3/4}, whose product is 1.
+        /// </summary>
+        private int Flank(long boundary, double step, bool outward)
+        {
+            double rs = step, eps = 1e-9 * Math.Max(rs, 1e-300);
+            double dIn = Math.Cbrt(_m / profile.Density(rs - eps)), dOut = Math.Cbrt(_m / profile.Density(Math.Min(rs + eps, profile.OuterRadius)));
+            if (!double.IsFinite(dIn) || !double.IsFinite(dOut)) return 0;
+            double t = Math.Sqrt(dIn * dOut) * Math.Pow(aspect, 2.0 / 3.0); // thickness a·ℓ with ℓ ∝ a^(−1/3) at fixed volume
+            double rb = RadiusAt(boundary);
+            double mass = outward
+                ? profile.EnclosedMass(Math.Min(rb + t, profile.OuterRadius)) - profile.EnclosedMass(rb)
+                : profile.EnclosedMass(rb) - profile.EnclosedMass(Math.Max(rb - t, 0));
+            return Math.Max(1, (int)Math.Round(Math.Sqrt(mass / (12 * _m))));
+        }
+
+        /// <summary>
+        /// Point counts at which shell boundaries must fall, with the step radius: each density step r_s at
+        /// c + 12 round((M(r_s)/m − c)/12) (within six points' mass of the step), then N (step NaN). A step is dropped
+        /// when a segment it bounds cannot hold even one shell of the target aspect (a layer thinner than the local
+        /// point spacing, such as a tenuous envelope over a few points): such a layer is below the resolution of
+        /// equal-mass points either way, and a shell of a dozen points spread over it would stand for it worse than the
+        /// neighbouring shell's points.
+        /// </summary>
+        private List<(long End, double Step)> SegmentEnds(int c)
+        {
+            var ends = new List<(long End, double Step)>();
+            long previous = c;
+            foreach (double step in profile.DensitySteps)
+            {
+                if (!(step > 0 && step < profile.OuterRadius)) continue;
+                long target = c + 12 * (long)Math.Round((profile.EnclosedMass(step) / _m - c) / 12);
+                if (target > previous && target < count) { ends.Add((target, step)); previous = target; }
+            }
+            ends.Add((count, double.NaN));
+            for (bool changed = true; changed && ends.Count > 1;)
+            {
+                changed = false;
+                for (int k = 0; k < ends.Count; k++)
+                {
+                    long start = k == 0 ? c : ends[k - 1].End;
+                    if (!Unresolved(start, ends[k].End)) continue;
+                    // Merge with the next segment (drop this end), or, for the last one, with the previous.
+                    ends.RemoveAt(k < ends.Count - 1 ? k : k - 1);
+                    changed = true;
+                    break;
+                }
+            }
+            return ends;
+        }
+
+        // True when the points [start, end) cannot fill one shell of the target aspect.
+        private bool Unresolved(long start, long end)
+        {
+            long q = (end - start) / 12;
+            return q < 1 || BestNSide(start, RadiusAt(start), q).Capped;
         }
 
         private double RadiusAt(double points) =>
