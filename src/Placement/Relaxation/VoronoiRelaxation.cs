@@ -39,7 +39,10 @@ namespace Placement.Relaxation;
 /// <see cref="RadialConstraint.RankStretch"/> <see cref="RadialRankStretch"/> moves the k-th nearest point to the radius
 /// enclosing (k + ½)/N of the mass after every step (exact to half a point whatever the step; equal masses). Cells whose
 /// ρ_target changes by more than a factor e across them (a density step runs through the cell) are left out of the
-/// residual like the cut cells: no arrangement makes V ρ(r_i) = m there.</para>
+/// residual like the cut cells: no arrangement makes V ρ(r_i) = m there. Known steps
+/// (<see cref="IRadialProfile.DensitySteps"/>) are different: a step-aware shell start ends a shell on each with equal
+/// thicknesses on both sides, so the face between the two flanking shells lies on the step and ρ_target(r_i) stands for
+/// their cells; generators within two cell radii of a known step are targeted but never moved.</para>
 /// <para>Deterministic: the tessellation, the geometry and every per-point loop run in fixed chunks that write only their
 /// own entries, and sums are taken sequentially, so the same input gives the same bits on any number of threads. Buffers
 /// (tessellator, gradients, solver vectors) are reused across iterations. Cost per iteration: one tessellation with face
@@ -134,12 +137,22 @@ public static class VoronoiRelaxation
         return Math.Abs(Math.Log(inner / outer)) > StraddleLimit;
     }
 
+    // True when a known density step of the profile passes within `reach` of r: the flanking shells a step-aware start
+    // put on either side of the step (their shared face on the step, their points half a shell from it) stay put.
+    private static bool NextToStep(IReadOnlyList<double> steps, double r, double reach)
+    {
+        for (int k = 0; k < steps.Count; k++)
+            if (Math.Abs(r - steps[k]) < reach) return true;
+        return false;
+    }
+
     // g_i = ln(V_i ρ_t(r_i)/m_i) for every cell; InvVolume_i = 1/V_i for the targeted cells (not cut by the domain, ρ_t > 0,
     // not straddling a density step), else 0.
     private static void Residuals(VoronoiCells cells, double[] x, double[] y, double[] z, double[] mass, IRadialProfile profile, Workspace w,
         ParallelSettings? parallel, out double std, out double interiorStd, out double interiorRms, out double maxAbs)
     {
         int n = cells.Count;
+        var steps = profile.DensitySteps;
         ParallelLoop.For(n, parallel, (s, e) =>
         {
             for (int i = s; i < e; i++)
@@ -148,9 +161,14 @@ public static class VoronoiRelaxation
                 double rho = profile.Density(r);
                 double v = cells.Volume[i];
                 w.G[i] = rho > 0 ? Math.Log(v * rho / mass[i]) : double.NaN;
-                w.InvVolume[i] = rho > 0 && !cells.CutByDomain[i] && !Straddles(profile, r, cells.CellRadius(i)) ? 1.0 / v : 0;
+                // A cell next to a known step is targeted (a step-aware start ends its cell on the step, so ρ_t(r_i) stands
+                // for it) but its generator stays put; other cells across a steep change are left out.
+                bool frozen = NextToStep(steps, r, 2 * cells.CellRadius(i));
+                w.Frozen[i] = frozen;
+                w.InvVolume[i] = rho > 0 && !cells.CutByDomain[i] && (frozen || !Straddles(profile, r, cells.CellRadius(i))) ? 1.0 / v : 0;
             }
         });
+        w.AnyFrozen = steps.Count > 0 && Array.IndexOf(w.Frozen, true) >= 0;
         double sum = 0, sum2 = 0, isum = 0, isum2 = 0, max = 0;
         int count = 0, interior = 0;
         for (int i = 0; i < n; i++)
@@ -182,6 +200,7 @@ public static class VoronoiRelaxation
             w.Ly[i] = alpha * (wcy[i] - y[i]);
             w.Lz[i] = alpha * (wcz[i] - z[i]);
             if (tangential) SphericalSteps.Project(x[i], y[i], z[i], ref w.Lx[i], ref w.Ly[i], ref w.Lz[i]);
+            if (w.Frozen[i]) { w.Lx[i] = 0; w.Ly[i] = 0; w.Lz[i] = 0; }
         }
         // Right-hand side b = −(g + J L) on the targeted rows, and the Jacobi preconditioner diag(J Jᵀ).
         ApplyJ(geo, w.InvVolume, w.Lx, w.Ly, w.Lz, w.Q, parallel);
@@ -200,7 +219,7 @@ public static class VoronoiRelaxation
         });
         Solve(geo, w, settings.SolverIterations, settings.Regularisation, tx, ty, tz, parallel);
         // δ = (J P)ᵀ λ; total step L + β δ, capped at a fraction of the cell radius.
-        ApplyJt(geo, w.InvVolume, w.Lambda, w.Dx, w.Dy, w.Dz, tx, ty, tz, parallel);
+        ApplyJt(geo, w.InvVolume, w.Lambda, w.Dx, w.Dy, w.Dz, tx, ty, tz, w.AnyFrozen ? w.Frozen : null, parallel);
         double beta = settings.VolumeStepFraction, cap = settings.MaxStepInCellRadii * trust;
         ParallelLoop.For(n, parallel, (s, e) =>
         {
@@ -230,7 +249,7 @@ public static class VoronoiRelaxation
         double rz = Dot(w.R, w.Zv, n), start = Dot(w.R, w.R, n);
         for (int k = 0; k < iterations && rz > 0; k++)
         {
-            ApplyJt(geo, w.InvVolume, w.P, w.Dx, w.Dy, w.Dz, tx, ty, tz, parallel);
+            ApplyJt(geo, w.InvVolume, w.P, w.Dx, w.Dy, w.Dz, tx, ty, tz, w.AnyFrozen ? w.Frozen : null, parallel);
             ApplyJ(geo, w.InvVolume, w.Dx, w.Dy, w.Dz, w.Q, parallel);
             for (int i = 0; i < n; i++) w.Q[i] += shift * w.Diag[i] * w.P[i];
             double pq = Dot(w.P, w.Q, n);
@@ -270,7 +289,7 @@ public static class VoronoiRelaxation
     // (Jᵀ λ)_k = (λ_k/V_k) ∂V_k/∂x_k + Σ_i (λ_i/V_i) ∂V_i/∂x_k over the neighbours i of k (a gather through the reverse faces).
     // With tangent projection (px, py, pz = positions) each result vector is projected on the plane normal to its point's radius.
     private static void ApplyJt(VoronoiCellGradients geo, double[] invVolume, double[] lambda, double[] rx, double[] ry, double[] rz,
-        double[]? px, double[]? py, double[]? pz, ParallelSettings? parallel)
+        double[]? px, double[]? py, double[]? pz, bool[]? frozen, ParallelSettings? parallel)
     {
         ParallelLoop.For(geo.Count, parallel, (s, e) =>
         {
@@ -289,6 +308,7 @@ public static class VoronoiRelaxation
                     sx += b * gx[g]; sy += b * gy[g]; sz += b * gz[g];
                 }
                 if (px is not null) SphericalSteps.Project(px[k], py![k], pz![k], ref sx, ref sy, ref sz);
+                if (frozen is not null && frozen[k]) { sx = 0; sy = 0; sz = 0; }
                 rx[k] = sx; ry[k] = sy; rz[k] = sz;
             }
         });
@@ -309,6 +329,8 @@ public static class VoronoiRelaxation
         public readonly double[] Radius = new double[n], G = new double[n], InvVolume = new double[n], B = new double[n], Diag = new double[n], Q = new double[n];
         public readonly double[] Lambda = new double[n], R = new double[n], Zv = new double[n], P = new double[n];
         public readonly double[] Lx = new double[n], Ly = new double[n], Lz = new double[n], Dx = new double[n], Dy = new double[n], Dz = new double[n];
+        public readonly bool[] Frozen = new bool[n];
+        public bool AnyFrozen;
     }
 
     private sealed class Recorder

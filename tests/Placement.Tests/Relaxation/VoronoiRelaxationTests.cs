@@ -165,6 +165,32 @@ public class VoronoiRelaxationTests
     }
 
     [Fact]
+    public void Relaxation_OfAStepAwareShellStart_HoldsTheShellsFlankingTheStep_AndLowersTheScatter()
+    {
+        // The INVENTED two-zone demo star (a tabulated step at 0.2 R). HEALPix shells end a shell on the step with equal
+        // thicknesses on both sides; those two shells must keep their points exactly (their shared Voronoi face is on
+        // the step), while the rest relaxes. Measured: body std 0.070 -> 0.062 at N = 2e4 (15 iterations).
+        var star = DemoBodies.TwoZoneStar();
+        double step = Assert.Single(star.DensitySteps);
+        var p = Start(star, "healpix-shells", 6000);
+        double inner = 0, outer = double.PositiveInfinity;
+        for (int i = 0; i < p.Count; i++)
+        {
+            double r = p.Radius(i);
+            if (r < step) inner = Math.Max(inner, r); else outer = Math.Min(outer, r);
+        }
+        // A shell's radii agree to rounding (each shell is rotated), so group within 1e-9 relative.
+        var flank = Enumerable.Range(0, p.Count).Where(i => Math.Abs(p.Radius(i) - inner) <= 1e-9 * inner || Math.Abs(p.Radius(i) - outer) <= 1e-9 * outer).ToArray();
+        var before = flank.Select(i => (p.X[i], p.Y[i], p.Z[i])).ToArray();
+        double std0 = Check(p, star).LogRatioByRegion.BodyStandardDeviation;
+        VoronoiRelaxation.Relax(p, star, new VoronoiRelaxationSettings { MaxIterations = 8 });
+        Assert.True(flank.Length > 100);
+        Assert.Equal(before, flank.Select(i => (p.X[i], p.Y[i], p.Z[i])).ToArray());
+        double std1 = Check(p, star).LogRatioByRegion.BodyStandardDeviation;
+        Assert.True(std1 < std0, $"body std {std0:F4} -> {std1:F4}");
+    }
+
+    [Fact]
     public void Relaxation_WithRankStretch_KeepsEnclosedMassExactFromAPoissonStart()
     {
         var body = new Polytrope(3.0, 1.0, 1.0, UnitSystem.Dimensionless);
