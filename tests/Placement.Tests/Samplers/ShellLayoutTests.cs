@@ -118,7 +118,7 @@ public class ShellLayoutTests
     [Theory]
     [InlineData(20_000)]
     [InlineData(200_000)]
-    public void ShellLayout_PutsABoundaryOnADensityStep_FlankedByShellsOfEqualThickness(int n)
+    public void ShellLayout_PutsABoundaryOnADensityStep_FlankedByShellsOfEqualThickness_WithTheBisectorOnIt(int n)
     {
         var profile = SteppedBody();
         Assert.Equal([0.4], profile.DensitySteps);

@@ -188,9 +188,11 @@ public sealed class ShellLayout
 
         /// <summary>
         /// N_side of the shell flanking the step at <paramref name="step"/> (boundary count <paramref name="boundary"/>)
-        /// on one side: radial thickness t = √(d_in d_out) (times a^{2/3} for a target aspect a), d = (m/ρ)^{1/3} the
-        /// cubic-cell spacing just inside and just outside the step, so both flanking shells have the same thickness
-        /// and aspects (d_out/d_in)^{±3/4}, whose product is 1.
+        /// on one side. The outer flank has radial thickness t = √(d_in d_out) (times a^{2/3} for a target aspect a),
+        /// d = (m/ρ)^{1/3} the cubic-cell spacing just inside and just outside the step; the inner flank puts its points'
+        /// radius (its mass midpoint) at the mirror image of the outer flank's about the boundary, so the bisector between
+        /// the two — their shared Voronoi face — lies on the step. Both then have about the same thickness and aspects
+        /// (d_out/d_in)^{±3/4}, whose product is 1.
         /// </summary>
         private int Flank(long boundary, double step, bool outward)
         {
@@ -199,10 +201,16 @@ public sealed class ShellLayout
             if (!double.IsFinite(dIn) || !double.IsFinite(dOut)) return 0;
             double t = Math.Sqrt(dIn * dOut) * Math.Pow(aspect, 2.0 / 3.0); // thickness a·ℓ with ℓ ∝ a^(−1/3) at fixed volume
             double rb = RadiusAt(boundary);
-            double mass = outward
-                ? profile.EnclosedMass(Math.Min(rb + t, profile.OuterRadius)) - profile.EnclosedMass(rb)
-                : profile.EnclosedMass(rb) - profile.EnclosedMass(Math.Max(rb - t, 0));
-            return Math.Max(1, (int)Math.Round(Math.Sqrt(mass / (12 * _m))));
+            double light = profile.EnclosedMass(Math.Min(rb + t, profile.OuterRadius)) - profile.EnclosedMass(rb);
+            int nOut = Math.Max(1, (int)Math.Round(Math.Sqrt(light / (12 * _m))));
+            if (outward) return nOut;
+            // The inner flank is matched to the outer one as rounded (its N_side is the coarser): its mass midpoint goes to
+            // the mirror image of the outer flank's points, 2 r_b − p_out, so the bisector between them is the step.
+            long outCount = 12L * nOut * nOut;
+            double pOut = RadiusAt(boundary + outCount / 2.0);
+            double mirror = Math.Max(0, 2 * rb - pOut);
+            double half = profile.EnclosedMass(rb) - profile.EnclosedMass(mirror);
+            return Math.Max(1, (int)Math.Round(Math.Sqrt(half / (6 * _m))));
         }
 
         /// <summary>
