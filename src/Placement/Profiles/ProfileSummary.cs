@@ -18,6 +18,7 @@ namespace Placement.Profiles;
 /// <param name="Radius90">Radius enclosing 90 % of the mass, length units.</param>
 /// <param name="QuantityNames">Names of the extra quantities the profile carries.</param>
 /// <param name="Fingerprint">The profile's fingerprint.</param>
+/// <param name="DensitySteps">Radii of the profile's density steps, length units (empty when it has none; null when not given).</param>
 public sealed record ProfileSummary(
     UnitSystem Units,
     double TotalMass,
@@ -31,7 +32,8 @@ public sealed record ProfileSummary(
     double HalfMassRadius,
     double Radius90,
     IReadOnlyList<string> QuantityNames,
-    string Fingerprint)
+    string Fingerprint,
+    IReadOnlyList<double>? DensitySteps = null)
 {
     /// <summary>Computes the summary; densities are sampled at 1000 radii from <see cref="ProfileSampling.Radii"/>.</summary>
     /// <exception cref="ArgumentNullException"><paramref name="profile"/> is null.</exception>
@@ -50,7 +52,7 @@ public sealed record ProfileSummary(
         foreach (var q in profile.Quantities) names.Add(q.Name);
         return new ProfileSummary(profile.Units, m, big, profile.Density(0), 3 * m / (4 * Math.PI * big * big * big), max, min, max / min,
             profile.RadiusOfEnclosedMass(0.1 * m), profile.RadiusOfEnclosedMass(0.5 * m), profile.RadiusOfEnclosedMass(0.9 * m),
-            names, profile.Fingerprint);
+            names, profile.Fingerprint, [.. profile.DensitySteps]);
     }
 
     /// <summary>A few lines of text with units, e.g. for a command-line report.</summary>
@@ -66,6 +68,8 @@ public sealed record ProfileSummary(
         sb.AppendLine(string.Create(c, $"density contrast {DensityContrast:G3} ({MaxDensity:G3} to {MinPositiveDensity:G3} {d})"));
         sb.AppendLine(string.Create(c, $"r(10%/50%/90%)   {Radius10:G5} / {HalfMassRadius:G5} / {Radius90:G5} {l}"));
         sb.AppendLine($"quantities       {(QuantityNames.Count == 0 ? "none" : string.Join(", ", QuantityNames))}");
+        if (DensitySteps is { Count: > 0 } steps)
+            sb.AppendLine(string.Create(c, $"density steps    {string.Join(", ", steps.Select(r => r.ToString("G6", c)))} {l}"));
         sb.Append($"fingerprint      {Fingerprint}");
         return sb.ToString();
     }

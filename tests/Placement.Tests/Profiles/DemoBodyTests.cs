@@ -21,6 +21,10 @@ public class DemoBodyTests
         var summary = ProfileSummary.Of(star);
         Assert.True(summary.DensityContrast > 1e9, $"contrast {summary.DensityContrast:E2}");
         Assert.Contains("P", summary.QuantityNames);
+        // The step is a repeated radius in the table: the profile and its summary name it.
+        Assert.Equal([0.2], star.DensitySteps);
+        Assert.Equal([0.2], summary.DensitySteps!);
+        Assert.Contains("density steps    0.2 R_sun", summary.ToString());
     }
 
     [Fact]
