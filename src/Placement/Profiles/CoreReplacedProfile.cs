@@ -59,7 +59,9 @@ public sealed class CoreReplacedProfile : IRadialProfile
     public double CutRadius { get; }
 
     /// <summary>The original profile's density steps outside the cut radius, length units.</summary>
-    public IReadOnlyList<double> DensitySteps => [.. _original.DensitySteps.Where(r => r > CutRadius)];
+    public IReadOnlyList<double> DensitySteps => _steps ??= [.. _original.DensitySteps.Where(r => r > CutRadius)];
+
+    private double[]? _steps;
 
     /// <summary>m_c, mass units (0 when no core was needed).</summary>
     public double CoreMass { get; }

@@ -40,8 +40,8 @@ namespace Placement.Relaxation;
 /// enclosing (k + ½)/N of the mass after every step (exact to half a point whatever the step; equal masses). Cells whose
 /// ρ_target changes by more than a factor e across them (a density step runs through the cell) are left out of the
 /// residual like the cut cells: no arrangement makes V ρ(r_i) = m there. Known steps
-/// (<see cref="IRadialProfile.DensitySteps"/>) are different: a step-aware shell start ends a shell on each with equal
-/// thicknesses on both sides, so the face between the two flanking shells lies on the step and ρ_target(r_i) stands for
+/// (<see cref="IRadialProfile.DensitySteps"/>) are different: a step-aware shell start ends a shell on each and mirrors
+/// the points of the two flanking shells about it, so the face between the two flanking shells lies on the step and ρ_target(r_i) stands for
 /// their cells; generators within two cell radii of a known step are targeted but never moved.</para>
 /// <para>Deterministic: the tessellation, the geometry and every per-point loop run in fixed chunks that write only their
 /// own entries, and sums are taken sequentially, so the same input gives the same bits on any number of threads. Buffers

@@ -73,9 +73,6 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
         return plan;
     }
 
-    // Shell starts carry exact shell masses, which kept radii preserve; other starts get exact quantiles from the rank stretch.
-
-
     /// <inheritdoc />
     /// <exception cref="ArgumentException">The plan is not a <see cref="VoronoiRelaxedPlan"/>.</exception>
     public void Fill(SamplingRequest request, SamplingPlan plan, int batch, PointSpans output)

@@ -19,6 +19,7 @@ namespace Placement.Samplers.Shells;
 /// steps (<see cref="IRadialProfile.DensitySteps"/>) split the body into segments that end on a shell boundary each: a
 /// shell straddling a step would put its points' cells across two densities (ln(Vρ/m) of order the log contrast for
 /// a whole shell). The step's boundary falls at the count c + 12j nearest to M(r_s)/m, so within six points' mass of
+/// the step; the two shells flanking it have their points mirrored about it, so the Voronoi face between them lies on
 /// the step. In each segment the outward pass stops when the remaining mass cannot fill a shell of the target
 /// aspect; then the last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
 /// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
@@ -152,16 +153,33 @@ public sealed class ShellLayout
             var sides = new List<int>();
             long enclosed = c;
             // Segments end at the density steps (each moved to the nearest count c + 12j, so whole shells fill it) and at
-            // the surface. Next to a step the two flanking shells get the same radial thickness, so their points sit
-            // symmetrically about it and the Voronoi boundary between them (the bisector) falls on the step; the rest of
-            // each segment is filled by the greedy pass and closed exactly by the tail search.
+            // the surface. Next to a step the two flanking shells' points sit mirrored about it (see Flank), so the Voronoi
+            // boundary between them (the bisector) falls on the step; the rest of each segment is filled by the greedy
+            // pass and closed exactly by the tail search.
             var ends = SegmentEnds(c);
+            // Flanks per step: inner[k] ends segment k, outer[k] starts segment k + 1. A step whose flanks do not leave room
+            // in either segment keeps none (both together, so the inner one is never mirrored to an outer one not placed).
+            int steps = ends.Count - 1;
+            var inner = new int[steps];
+            var outer = new int[steps];
+            for (int k = 0; k < steps; k++)
+            {
+                outer[k] = Flank(ends[k].End, ends[k].Step, outward: true);
+                inner[k] = Flank(ends[k].End, ends[k].Step, outward: false);
+            }
+            long Points(int side) => 12L * side * side;
+            for (int k = 0; k < steps; k++)
+            {
+                long below = ends[k].End - (k == 0 ? c : ends[k - 1].End), above = ends[k + 1].End - ends[k].End;
+                long belowUsed = Points(inner[k]) + (k > 0 ? Points(outer[k - 1]) : 0);
+                long aboveUsed = Points(outer[k]) + (k + 1 < steps ? Points(inner[k + 1]) : 0);
+                if (belowUsed >= below || aboveUsed >= above) inner[k] = outer[k] = 0;
+            }
             for (int k = 0; k < ends.Count; k++)
             {
                 var (end, _) = ends[k];
-                int first = k > 0 ? Flank(ends[k - 1].End, ends[k - 1].Step, outward: true) : 0;
-                int last = k < ends.Count - 1 ? Flank(end, ends[k].Step, outward: false) : 0;
-                if (12L * ((long)first * first + (long)last * last) >= end - enclosed) first = last = 0;
+                int first = k > 0 ? outer[k - 1] : 0;
+                int last = k < steps ? inner[k] : 0;
                 var segment = new List<int>();
                 if (first > 0) { segment.Add(first); enclosed += 12L * first * first; }
                 long fillEnd = end - 12L * last * last;
