@@ -17,8 +17,9 @@ namespace Placement.Tessellation;
 /// removed triangles) and fans new triangles (x, y, new) over it. Nothing else is stored: no adjacency to rebuild.</para>
 /// <para>Robustness: a vertex is removed only if it lies beyond the plane by more than <c>Tolerance</c> (a length,
 /// relative to the cell size), so planes through existing vertices (co-spherical neighbours, lattices) leave the
-/// cell unchanged and add no face. If rounding ever makes the removed patch not a disc, the clip is retried with a
-/// larger tolerance; if that fails too an exception names the generator.</para>
+/// cell unchanged and add no face. If rounding ever makes the removed patch not a disc, the clip is retried with
+/// tolerances 64× larger each time, from the fifth try relative to the cell's farthest vertex (1e-10 R_max and up) rather
+/// than to the neighbour spacing; if all eight fail an exception names the generator.</para>
 /// <para>Memory: capacity grows on demand; a typical cell (16 planes, 28 vertices) touches about 3 KB, held once per
 /// thread. Coordinates are relative to the generator, which keeps rounding relative to the cell size.</para>
 /// </remarks>
@@ -37,6 +38,9 @@ internal sealed class ConvexCell
     private readonly ulong[] _outMask = new ulong[64], _inMask = new ulong[64];
     private int[] _next = new int[64], _nextStamp = new int[64];
     private int _stamp;
+
+    // First of the cell-extent-relative tolerances (see Clip), as a fraction of the farthest vertex distance.
+    private const double FarTolerance = 1e-10;
 
     public int PlaneCount => _planeCount;
 
@@ -112,14 +116,18 @@ internal sealed class ConvexCell
         // Quick rejection: no vertex can lie beyond a plane farther than the farthest vertex.
         double reach = d - eps;
         if (reach > 0 && reach * reach > MaxRadiusSquared * norm * norm) return false;
-        for (int attempt = 0; attempt < 4; attempt++)
+        for (int attempt = 0; attempt < 8; attempt++)
         {
             int r = Classify(nx, ny, nz, d + eps);
             if (r == 0) return false;
             if (r == _triCount)
                 throw new InvalidOperationException("A clipping plane removed the whole cell; the generator lies outside its own half-space.");
             if (TryRebuild(nx, ny, nz, d, neighbour)) return true;
-            eps *= 64;
+            // After four tries relative to the neighbour spacing, tolerances relative to the cell's own extent: a vertex
+            // where several nearly dependent planes meet (the bisectors of points on one sphere all pass through its
+            // centre, so an unfinished cell of a shell point has a many-plane apex there) is rounded by about
+            // 1e-16 R_max / det, far beyond the spacing-relative tolerance when the cell still reaches the domain box.
+            eps = attempt == 3 ? Math.Max(eps * 64, FarTolerance * Math.Sqrt(MaxRadiusSquared) * norm) : eps * 64;
         }
         throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance (degenerate input beyond double precision).");
     }

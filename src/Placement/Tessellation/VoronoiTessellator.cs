@@ -113,7 +113,16 @@ public sealed class VoronoiTessellator
                     worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing) : new CellBuilder(null, tree, domain, options, cells, spacing);
                 worker.BeginChunk();
                 FaceBuffer? faces = chunkFaces is null ? null : new FaceBuffer();
-                for (int k = start; k < end; k++) worker.Build(order[k], faces);
+                for (int k = start; k < end; k++)
+                {
+                    try { worker.Build(order[k], faces); }
+                    catch (InvalidOperationException e)
+                    {
+                        int slot = order[k], i = index[slot];
+                        throw new InvalidOperationException(
+                            $"Voronoi cell of generator {i} at ({x[i]:R}, {y[i]:R}, {z[i]:R}): {e.Message}", e);
+                    }
+                }
                 if (chunkFaces is not null) chunkFaces[start / chunk] = faces!;
                 Interlocked.Add(ref tested, worker.PlanesTested);
                 Interlocked.Add(ref cut, worker.PlanesCut);
