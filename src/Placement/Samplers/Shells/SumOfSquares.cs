@@ -13,20 +13,7 @@ internal static class SumOfSquares
         int l = targets.Length;
         if (l == 0) return q == 0 ? [] : null;
         var t = targets.ToArray();
-        var lo = new long[l];
-        var hi = new long[l];
-        var minRest = new long[l + 1];
-        var maxRest = new long[l + 1];
-        for (int i = 0; i < l; i++)
-        {
-            lo[i] = Math.Max(1, (long)Math.Floor(t[i]) - delta);
-            hi[i] = (long)Math.Ceiling(t[i]) + delta;
-        }
-        for (int i = l - 1; i >= 0; i--)
-        {
-            minRest[i] = minRest[i + 1] + lo[i] * lo[i];
-            maxRest[i] = maxRest[i + 1] + hi[i] * hi[i];
-        }
+        var (lo, hi, minRest, maxRest) = Windows(t, _ => delta);
         if (q < minRest[0] || q > maxRest[0]) return null;
         var current = new int[l];
         int[]? best = null;
@@ -52,19 +39,57 @@ internal static class SumOfSquares
                 return;
             }
             long centre = Math.Clamp((long)Math.Round(t[i]), lo[i], hi[i]);
-            // Nearest first: centre, centre − 1, centre + 1, centre − 2, …
-            for (long step = 0; ; step++)
+            for (long step = 0; NextCandidate(centre, ref step, i, remaining, lo, hi, minRest, maxRest, out long a, out long rest); step++)
             {
-                long a = centre - (step + 1) / 2 * ((step & 1) == 1 ? 1 : -1);
-                if (centre - (step + 1) / 2 < lo[i] && centre + (step + 1) / 2 > hi[i]) break;
-                if (a < lo[i] || a > hi[i]) continue;
-                long rest = remaining - a * a;
-                if (rest < minRest[i + 1] || rest > maxRest[i + 1]) continue;
                 double e = (a - t[i]) / t[i];
                 current[i] = (int)a;
                 Search(i + 1, rest, score + e * e);
                 if (visited > budget) return;
             }
+        }
+    }
+
+    /// <summary>
+    /// Search windows n_i ∈ [max(1, ⌊t_i⌋ − δ_i), ⌈t_i⌉ + δ_i] with δ_i = <paramref name="delta"/>(t_i), and the least and
+    /// largest Σ n_j² over j ≥ i (index i of MinRest/MaxRest, length l + 1) for pruning a search that fixes n_0, n_1, … in
+    /// order.
+    /// </summary>
+    public static (long[] Lo, long[] Hi, long[] MinRest, long[] MaxRest) Windows(double[] targets, Func<double, int> delta)
+    {
+        int l = targets.Length;
+        var lo = new long[l];
+        var hi = new long[l];
+        var minRest = new long[l + 1];
+        var maxRest = new long[l + 1];
+        for (int i = 0; i < l; i++)
+        {
+            int d = delta(targets[i]);
+            lo[i] = Math.Max(1, (long)Math.Floor(targets[i]) - d);
+            hi[i] = (long)Math.Ceiling(targets[i]) + d;
+        }
+        for (int i = l - 1; i >= 0; i--)
+        {
+            minRest[i] = minRest[i + 1] + lo[i] * lo[i];
+            maxRest[i] = maxRest[i + 1] + hi[i] * hi[i];
+        }
+        return (lo, hi, minRest, maxRest);
+    }
+
+    /// <summary>
+    /// Advances <paramref name="step"/> to the next candidate for window <paramref name="i"/> in nearest-first order around
+    /// <paramref name="centre"/> (centre, centre − 1, centre + 1, centre − 2, …) that lies in the window and leaves a rest
+    /// Σ the later windows can still hold; false once both sides have left the window.
+    /// </summary>
+    public static bool NextCandidate(long centre, ref long step, int i, long remaining, long[] lo, long[] hi, long[] minRest, long[] maxRest, out long a, out long rest)
+    {
+        for (; ; step++)
+        {
+            a = centre - (step + 1) / 2 * ((step & 1) == 1 ? 1 : -1);
+            rest = 0;
+            if (centre - (step + 1) / 2 < lo[i] && centre + (step + 1) / 2 > hi[i]) return false;
+            if (a < lo[i] || a > hi[i]) continue;
+            rest = remaining - a * a;
+            if (rest >= minRest[i + 1] && rest <= maxRest[i + 1]) return true;
         }
     }
 
