@@ -28,7 +28,7 @@ namespace Placement.Samplers.Shells;
 /// ten greedy shells and the remainder re-spaced as one smooth run of real N_side at a common aspect (K shells, the
 /// fractional count rounded down or up), rounded either to the nearest integers with the exact sum or by a search that
 /// minimises the predicted cell-volume error. Of all closings the one whose predicted ln(V ρ / m) over the segment has
-/// the smallest rms is kept — 1-D: a shell's cells reach from the midpoint between its points' radius and its inner
+/// the smallest rms (with a shape term for shells beyond 1.5× the target aspect either way) is kept — 1-D: a shell's cells reach from the midpoint between its points' radius and its inner
 /// neighbour's to the midpoint with its outer neighbour's — because integer N_side cannot follow a smooth run closely
 /// where N_side is small, and equal or jumping N_side next to each other move the faces off the shell boundaries (the
 /// next shell's cells are then too large or small as a whole). The outermost shell always
@@ -286,10 +286,11 @@ public sealed class ShellLayout
         /// <see cref="SmoothTargets"/> with the fractional shell count rounded down or up. Where the fill meets a flank or an
         /// awkward remainder (a shell much thinner than its neighbours, or pairs of equal N_side in a short segment), the
         /// faces between unlike shells move off the shell boundaries and whole shells of cells come out too large or too
-        /// small; so the candidate whose shells' predicted ln(V ρ / m) has the smallest rms is kept (ties to the first).
-        /// The prediction is the 1-D one: shell j's cells reach from the midpoint between its points' radius and its inner
-        /// neighbour's to the midpoint with its outer neighbour's, and hold the profile mass between them (the surface
-        /// shell, reaching R, is left out: its offset is the surface layer's).
+        /// small; so the candidate whose shells' predicted ln(V ρ / m) has the smallest rms, with
+        /// <see cref="ShapePenalty"/> added, is kept (ties to the first). The prediction is the 1-D one: shell j's cells
+        /// reach from the midpoint between its points' radius and its inner neighbour's to the midpoint with its outer
+        /// neighbour's, and hold the profile mass between them (the surface shell, reaching R, is left out of the
+        /// prediction, its offset being the surface layer's, but not of the shape term).
         /// </summary>
         private List<int> BestFill(long from, long to, List<int> head, int tail, Layer previous, double nextPoint)
         {
@@ -441,7 +442,7 @@ public sealed class ShellLayout
                     if (i == k - 1 && rest != 0) continue;
                     long size = 12 * a * a;
                     double p = RadiusAt(at + size / 2.0);
-                    double lower = 0.0, s = score;
+                    double lower = 0.0, s = score + ShapePenalty(at, (int)a);
                     if (pointsBefore > 0)
                     {
                         lower = profile.EnclosedMass(0.5 * (pBefore + p));
@@ -574,6 +575,12 @@ public sealed class ShellLayout
                 counted++;
             }
             long end = start + SumPoints(shells);
+            long at = start;
+            for (int i = 0; i < k; i++)
+            {
+                sum += ShapePenalty(at, shells[i]);
+                at += 12L * shells[i] * shells[i];
+            }
             for (int i = 0; i < k; i++)
             {
                 long points = 12L * shells[i] * shells[i];
@@ -585,7 +592,22 @@ public sealed class ShellLayout
                 sum += e * e;
                 counted++;
             }
-            return counted == 0 ? 0 : Math.Sqrt(sum / counted);
+            return Math.Sqrt(sum / Math.Max(counted, 1));
+        }
+
+        // Aspects within this factor of the target cost nothing in the closing's score.
+        private const double AspectBand = 1.5;
+
+        /// <summary>
+        /// The shape term of a closing's score for the shell of <paramref name="n"/> starting at count
+        /// <paramref name="enclosed"/>: (|ln(aspect / target)| − ln 1.5)² beyond a factor 1.5 of the target aspect, else 0.
+        /// It keeps the predicted-error choice from buying even cell volumes with cells a mesh code would correct, such as a
+        /// shell of a dozen points spread thin over a steep envelope.
+        /// </summary>
+        private double ShapePenalty(long enclosed, int n)
+        {
+            double excess = Math.Abs(LogAspectError(enclosed, RadiusAt(enclosed), n)) - Math.Log(AspectBand);
+            return excess > 0 ? excess * excess : 0.0;
         }
 
         /// <summary>log(aspect of the shell with this N_side starting at rIn / target aspect).</summary>
