@@ -19,7 +19,8 @@ namespace Placement.Tessellation;
 /// relative to the cell size), so planes through existing vertices (co-spherical neighbours, lattices) leave the
 /// cell unchanged and add no face. If rounding ever makes the removed patch not a disc, the clip is retried with
 /// tolerances 64× larger each time, from the fifth try relative to the cell's farthest vertex (1e-10 R_max and up) rather
-/// than to the neighbour spacing; if all eight fail an exception names the generator.</para>
+/// than to the neighbour spacing; if all eight fail, the cell is rebuilt from its box with the failing plane first (see
+/// <c>Restart</c>), and only if that fails too an exception names the generator.</para>
 /// <para>Memory: capacity grows on demand; a typical cell (16 planes, 28 vertices) touches about 3 KB, held once per
 /// thread. Coordinates are relative to the generator, which keeps rounding relative to the cell size.</para>
 /// </remarks>
@@ -70,6 +71,8 @@ internal sealed class ConvexCell
     /// </summary>
     public void InitBox(double lox, double loy, double loz, double hix, double hiy, double hiz, ReadOnlySpan<int> codes)
     {
+        _box[0] = lox; _box[1] = loy; _box[2] = loz; _box[3] = hix; _box[4] = hiy; _box[5] = hiz;
+        codes[..6].CopyTo(_boxCodes);
         _planeCount = 0;
         AddPlane(-1, 0, 0, -lox, codes[0]);
         AddPlane(1, 0, 0, hix, codes[1]);
@@ -129,7 +132,52 @@ internal sealed class ConvexCell
             // 1e-16 R_max / det, far beyond the spacing-relative tolerance when the cell still reaches the domain box.
             eps = attempt == 3 ? Math.Max(eps * 64, FarTolerance * Math.Sqrt(MaxRadiusSquared) * norm) : eps * 64;
         }
-        throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance (degenerate input beyond double precision).");
+        return Restart(nx, ny, nz, d, neighbour);
+    }
+
+    // The box of the last InitBox (lo x, y, z, hi x, y, z) and its face codes, for Restart.
+    private readonly double[] _box = new double[6];
+    private readonly int[] _boxCodes = new int[6];
+    private int _restarts;
+
+    // Restarts allowed per cell (nested: a replay that fails restarts again with that plane first as well).
+    private const int MaxRestarts = 8;
+
+    /// <summary>
+    /// Last resort when a clip stays inconsistent: the cell is the intersection of the box and every plane stored so far
+    /// (a plane that did not cut never can later), whatever the order, so it is rebuilt from the box with the failing
+    /// plane first and the stored ones after it. The usual failure is a many-plane degenerate vertex — the bisectors of
+    /// points on one sphere all pass through its centre, so a shell point clipped first by its own shell's neighbours
+    /// grows a cone whose apex at the body centre is met by dozens of planes — and the failing plane is then the one
+    /// that cuts that apex away; clipped first, the apex never forms.
+    /// </summary>
+    private bool Restart(double nx, double ny, double nz, double d, int neighbour)
+    {
+        if (_restarts >= MaxRestarts)
+            throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance and reordering the planes (degenerate input beyond double precision).");
+        int stored = _planeCount - 6;
+        // A snapshot per restart (rare), so a nested restart cannot overwrite the planes this one still replays.
+        var planes = new double[4 * stored];
+        var neighbours = new int[stored];
+        for (int p = 0; p < stored; p++)
+        {
+            planes[4 * p] = _nx[p + 6]; planes[4 * p + 1] = _ny[p + 6]; planes[4 * p + 2] = _nz[p + 6]; planes[4 * p + 3] = _d[p + 6];
+            neighbours[p] = _neighbour[p + 6];
+        }
+        _restarts++;
+        try
+        {
+            InitBox(_box[0], _box[1], _box[2], _box[3], _box[4], _box[5], _boxCodes);
+            Clip(nx, ny, nz, d, neighbour);
+            for (int p = 0; p < stored; p++) Clip(planes[4 * p], planes[4 * p + 1], planes[4 * p + 2], planes[4 * p + 3], neighbours[p]);
+        }
+        finally
+        {
+            _restarts--;
+        }
+        for (int p = 0; p < _planeCount; p++)
+            if (_neighbour[p] == neighbour && _nx[p] == nx && _ny[p] == ny && _nz[p] == nz && _d[p] == d) return true;
+        return false;
     }
 
     // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.

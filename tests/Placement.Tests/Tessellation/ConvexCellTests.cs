@@ -51,4 +51,80 @@ public class ConvexCellTests
         // The eighth neighbour's bisector must have cut the cone (it is nearer than the cell's far vertices).
         Assert.Contains(7, cell.Neighbour.ToArray());
     }
+
+    [Fact]
+    public void ThinDenseShellCell_WhoseConeApexCannotBeCutConsistently_IsRebuiltWithTheCuttingPlaneFirst()
+    {
+        // Replays the clips of a cell that still failed with the larger tolerances: the HEALPix-shell placement (2e4
+        // points, R = 1 R_sun) of an invented body with a thin shell 100× denser than its surroundings at 0.6 R. The
+        // point at 0.605 R was clipped first by 34 neighbours on its own thin shell, whose bisectors all pass through the
+        // body centre: dozens of vertices there, rounded into an inconsistent fan, and the 35th plane (a point of an
+        // inner shell) cuts the whole fan away. Rebuilt from the box with that plane first, the apex never forms.
+        double gx = 0.24208796161129784, gy = 0.4712842034453684, gz = -0.2922676913769451;
+        double[,] offsets =
+        {
+            { -0.01992977257485337, -0.019536046034750232, -0.04344815024691473 },
+            { -0.014912756881081318, 0.028019630352328517, 0.036879960842050585 },
+            { -0.00046512178255728176, 0.01936191898898837, 0.03338437632886615 },
+            { -0.02177953522010459, 0.023171044012843922, 0.021871703020734157 },
+            { -0.04332844806981542, 0.025945928708267674, 0.010500701734281637 },
+            { -0.007329862644563423, 0.014521574287793215, 0.01837507320759646 },
+            { -0.028591246111518337, 0.017787423383442413, 0.007024144037334923 },
+            { 0.006813992747865677, 0.005392858742623574, 0.014846386324373517 },
+            { -0.014141595306519844, 0.00913785764120717, 0.0035275273767966797 },
+            { -0.035327735005908106, 0.011866027513021848, -0.007652044579193662 },
+            { -0.02087998240139452, 0.0032072640874357683, -0.011147308531587352 },
+            { -0.041968446035022505, 0.005404337536910386, -0.02214604779289636 },
+            { -0.006742700329391643, -0.005949616719085171, -0.01467223008243157 },
+            { -0.02752425217669563, -0.0032735462105438207, -0.025638307788451165 },
+            { 0.0070626784150086, -0.015602340234069423, -0.018237997961943808 },
+            { -0.01339312132658868, -0.012460232610136679, -0.029158845814991785 },
+            { 0.00040288073122049517, -0.022154311228446022, -0.03271894880121573 },
+            { 0.013678759147163905, 0.010233298787842848, 0.029855678327599278 },
+            { 0.02749913900434922, 0.0006381596355267694, 0.02628298617220831 },
+            { 0.040976008688210636, -0.009418767917155235, 0.02265520431510515 },
+            { 0.020631754935919316, -0.004211349515917395, 0.011274658266504145 },
+            { 0.03410282846064658, -0.014286997539649404, 0.007648671859874168 },
+            { 0.013812702675693372, -0.009623098055624058, -0.0035695253231411983 },
+            { 0.02727529350124977, -0.01972813501125875, -0.007192387519324328 },
+            { 0.04036611264447379, -0.030311597794474787, -0.01088019662301154 },
+            { 0.02051427019529664, -0.025748442359315726, -0.021856071558502332 },
+            { 0.013841161708623179, -0.03235425583721013, -0.03633019347086369 },
+            { 0.021764162325746933, -0.0015436212411760741, 0.04272720714509015 },
+            { 0.020574219045416037, 0.014525804522680541, 0.0450168066306981 },
+            { -0.04044498536172428, -0.017898630794837, -0.054023252250839426 },
+            { -0.006144949991411602, -0.029284294518721665, -0.04700028644240639 },
+            { -0.02633061785555993, -0.02718127764206718, -0.057528170384559485 },
+            { 0.007277951697603563, -0.039552068211262115, -0.050602239767322144 },
+            { -0.012558484353522997, -0.03699770163166172, -0.06106959565804032 },
+            { -0.016303681886350535, -0.04956967379903554, -0.010663954555008626 },
+        };
+        var cell = new ConvexCell();
+        cell.InitBox(-1 - gx, -1 - gy, -1 - gz, 1 - gx, 1 - gy, 1 - gz, [-1, -2, -3, -4, -5, -6]);
+        var half = new List<(double X, double Y, double Z, double D)>();
+        for (int k = 0; k < offsets.GetLength(0); k++)
+        {
+            double dx = offsets[k, 0], dy = offsets[k, 1], dz = offsets[k, 2], d2 = dx * dx + dy * dy + dz * dz;
+            if (k == 0) cell.Tolerance = 1e-12 * Math.Sqrt(d2);
+            cell.Clip(dx, dy, dz, 0.5 * d2, k);
+            half.Add((dx, dy, dz, 0.5 * d2));
+        }
+        // The last plane cut the cell (the centre lies beyond it) and the result lies inside every half-space applied.
+        Assert.Contains(offsets.GetLength(0) - 1, cell.Neighbour.ToArray());
+        AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
+    }
+
+    // Every vertex of the cell within `slack` (length) of every half-space n·x ≤ d given.
+    private static void AssertInside(ConvexCell cell, List<(double X, double Y, double Z, double D)> half, double slack)
+    {
+        foreach (var (x, y, z, d) in half)
+        {
+            double norm = Math.Sqrt(x * x + y * y + z * z);
+            for (int v = 0; v < cell.TriangleCount; v++)
+            {
+                double over = (x * cell.Vx[v] + y * cell.Vy[v] + z * cell.Vz[v] - d) / norm;
+                Assert.True(over <= slack, $"vertex {v} lies {over} beyond a plane");
+            }
+        }
+    }
 }
