@@ -123,6 +123,8 @@ internal sealed class CellBuilder
                 ClipBy(bx[q], by[q], bz[q], d2, self, index[slotOf[q]], gx, gy, gz);
             }
             double security2 = 4.0 * cell.MaxRadiusSquared;
+            // A NaN extent would never meet the loop's exits: fail loudly instead of spinning.
+            if (!double.IsFinite(security2)) throw new InvalidOperationException("A cell vertex is not finite (degenerate planes).");
             if (security2 > outer2 && _domain.Kind == DomainKind.Sphere && !preclipped)
             {
                 PreclipToSphere(gx, gy, gz);

@@ -257,11 +257,14 @@ internal sealed class ConvexCell
         int boundary = 0, first = -1;
         bool ok = _planeCount <= 64 ? BoundaryByMasks(stamp, ref boundary, ref first) : BoundaryByEdges(stamp, ref boundary, ref first);
         if (!ok || boundary < 3) return false;
-        // Walk the cycle once to check it is a single loop through every boundary edge.
+        // Walk the cycle once to check it is a single loop through every boundary edge, and that every new vertex is
+        // defined: planes x, next[x] and the new one must meet in one point (a zero determinant, possible only at a
+        // degenerate edge, would make the vertex NaN and the cell's extent with it).
         int steps = 0, x = first;
         do
         {
             if (_nextStamp[x] != stamp) return false;
+            if (!double.IsFinite(1.0 / TripleProduct(x, _next[x], nx, ny, nz))) return false;
             x = _next[x];
             steps++;
         } while (x != first && steps <= boundary);
@@ -382,6 +385,14 @@ internal sealed class ConvexCell
     {
         _ta[to] = _ta[from]; _tb[to] = _tb[from]; _tc[to] = _tc[from];
         _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
+    }
+
+    // n_a · (n_b × n) for stored planes a, b and a new normal n.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private double TripleProduct(int a, int b, double nx, double ny, double nz)
+    {
+        double bcx = _ny[b] * nz - _nz[b] * ny, bcy = _nz[b] * nx - _nx[b] * nz, bcz = _nx[b] * ny - _ny[b] * nx;
+        return _nx[a] * bcx + _ny[a] * bcy + _nz[a] * bcz;
     }
 
     // Sets the vertex of triangle t, where planes a, b and c meet, and returns its squared distance from the generator.

@@ -114,6 +114,61 @@ public class ConvexCellTests
         AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
     }
 
+    [Fact]
+    public void CuspCell_WithPlanesMeetingInNoPoint_StaysFinite()
+    {
+        // Replays the clips of a cell that once made a tessellation spin forever: the HEALPix-shell placement (1e5
+        // points, R = 1 R_sun) of an invented ρ ∝ r⁻² cusp, a point at 1e-4 R. The tenth plane's boundary edge met it in
+        // no single point (zero triple product), the new vertex came out NaN, and with it the cell's extent, which no
+        // exit test of the neighbour search could then pass. Such a rebuild is now refused and retried like any other
+        // inconsistent clip.
+        double gx = 2.9839684906753094E-05, gy = -3.6468430607725316E-05, gz = 8.895735567513681E-05;
+        double[,] offsets =
+        {
+            { -4.068069687746589E-05, 4.399648088654751E-05, -7.305416484851058E-05 },
+            { -1.3668390390632166E-05, 2.6474838096075837E-05, -8.085008101581493E-05 },
+            { -4.000660475958942E-05, 1.9915483174824185E-05, -9.601031477095725E-05 },
+            { -3.7015293204569596E-06, -6.0037877802985107E-05, -7.724865743318863E-05 },
+            { -9.292260458461608E-05, 2.8855812566632938E-05, -1.087818017670892E-05 },
+            { 6.64952358785008E-05, 8.024403988913746E-06, -8.23026774676816E-05 },
+            { -2.7552035162849876E-05, 0.00010172658105083646, -1.234205162672183E-05 },
+            { -3.35844250446805E-05, 5.1800405601987935E-05, -0.00010229969520358545 },
+            { -9.862257052915711E-05, -3.681412382429956E-05, -8.326998225587019E-05 },
+            { 3.8943200715650924E-05, 0.00010975098503975019, -9.464472909440343E-05 },
+            { 0.00012355090968627221, -6.615288621751651E-05, 3.201331792229447E-05 },
+            { -8.36373562395991E-05, -0.00010906287492412479, 6.795077896587904E-05 },
+            { -3.212733465065631E-05, -2.8789719835385823E-05, -0.00016557265972355178 },
+            { -0.000126174605692007, 6.491245722653688E-05, -9.561203388259202E-05 },
+            { -5.597784049304923E-05, 0.00013297473901843575, -0.00010066605391708499 },
+            { 3.3243234771109895E-05, 4.4081048648817695E-05, -0.0001670365311735647 },
+            { 9.650266256294572E-05, 0.00014545757898051163, 5.544724889128772E-05 },
+            { -0.00010676147659587183, 0.00010057093168681073, 0.00010768348536737512 },
+            { -5.967936981350619E-05, 7.293686121545063E-05, -0.00017791471135027363 },
+            { -9.625617959280918E-06, -0.00018103753591752956, -0.0001202025004263232 },
+            { 0.0001802586344279188, 8.725057922865295E-05, -0.00013338237836903107 },
+            { -0.00023993800424142498, -1.4313718013202317E-05, -4.453233298124254E-05 },
+            { -5.005375185422527E-05, 0.00025397439713298017, -5.771221092395043E-05 },
+            { 4.7082106782365645E-05, -2.7634070471360098E-05, -0.00028559819671764876 },
+            { -0.0001561820323764519, -7.252071776506101E-05, -0.00023336196024156136 },
+            { 2.395798642609291E-05, 0.00018199973613957542, -0.00024586549031615265 },
+            { -0.0001832302794997784, 0.00013908974743296714, -0.0002099280292725681 },
+        };
+        var cell = new ConvexCell();
+        cell.InitBox(-1 - gx, -1 - gy, -1 - gz, 1 - gx, 1 - gy, 1 - gz, [-1, -2, -3, -4, -5, -6]);
+        var half = new List<(double X, double Y, double Z, double D)>();
+        for (int k = 0; k < offsets.GetLength(0); k++)
+        {
+            double dx = offsets[k, 0], dy = offsets[k, 1], dz = offsets[k, 2], d2 = dx * dx + dy * dy + dz * dz;
+            if (k == 0) cell.Tolerance = 1e-12 * Math.Sqrt(d2);
+            cell.Clip(dx, dy, dz, 0.5 * d2, k);
+            Assert.True(double.IsFinite(cell.MaxRadiusSquared), $"extent not finite after clip {k}");
+            half.Add((dx, dy, dz, 0.5 * d2));
+        }
+        for (int v = 0; v < cell.TriangleCount; v++)
+            Assert.True(double.IsFinite(cell.Vx[v]) && double.IsFinite(cell.Vy[v]) && double.IsFinite(cell.Vz[v]), $"vertex {v}");
+        AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
+    }
+
     // Every vertex of the cell within `slack` (length) of every half-space n·x ≤ d given.
     private static void AssertInside(ConvexCell cell, List<(double X, double Y, double Z, double D)> half, double slack)
     {
