@@ -99,16 +99,7 @@ public class ConvexCellTests
             { -0.012558484353522997, -0.03699770163166172, -0.06106959565804032 },
             { -0.016303681886350535, -0.04956967379903554, -0.010663954555008626 },
         };
-        var cell = new ConvexCell();
-        cell.InitBox(-1 - gx, -1 - gy, -1 - gz, 1 - gx, 1 - gy, 1 - gz, [-1, -2, -3, -4, -5, -6]);
-        var half = new List<(double X, double Y, double Z, double D)>();
-        for (int k = 0; k < offsets.GetLength(0); k++)
-        {
-            double dx = offsets[k, 0], dy = offsets[k, 1], dz = offsets[k, 2], d2 = dx * dx + dy * dy + dz * dz;
-            if (k == 0) cell.Tolerance = 1e-12 * Math.Sqrt(d2);
-            cell.Clip(dx, dy, dz, 0.5 * d2, k);
-            half.Add((dx, dy, dz, 0.5 * d2));
-        }
+        var (cell, half) = Replay(gx, gy, gz, offsets, null);
         // The last plane cut the cell (the centre lies beyond it) and the result lies inside every half-space applied.
         Assert.Contains(offsets.GetLength(0) - 1, cell.Neighbour.ToArray());
         AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
@@ -153,6 +144,16 @@ public class ConvexCellTests
             { 2.395798642609291E-05, 0.00018199973613957542, -0.00024586549031615265 },
             { -0.0001832302794997784, 0.00013908974743296714, -0.0002099280292725681 },
         };
+        var (cell, half) = Replay(gx, gy, gz, offsets, (c, k) => Assert.True(double.IsFinite(c.MaxRadiusSquared), $"extent not finite after clip {k}"));
+        for (int v = 0; v < cell.TriangleCount; v++)
+            Assert.True(double.IsFinite(cell.Vx[v]) && double.IsFinite(cell.Vy[v]) && double.IsFinite(cell.Vz[v]), $"vertex {v}");
+        AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
+    }
+
+    // Clips a cell in the box [−1, 1]³ (relative to the generator g) by the bisectors of the given neighbour offsets, in
+    // order, with the tessellation's tolerance (1e-12 × the first neighbour's distance); `afterEach` sees each step.
+    private static (ConvexCell Cell, List<(double X, double Y, double Z, double D)> Half) Replay(double gx, double gy, double gz, double[,] offsets, Action<ConvexCell, int>? afterEach)
+    {
         var cell = new ConvexCell();
         cell.InitBox(-1 - gx, -1 - gy, -1 - gz, 1 - gx, 1 - gy, 1 - gz, [-1, -2, -3, -4, -5, -6]);
         var half = new List<(double X, double Y, double Z, double D)>();
@@ -161,12 +162,10 @@ public class ConvexCellTests
             double dx = offsets[k, 0], dy = offsets[k, 1], dz = offsets[k, 2], d2 = dx * dx + dy * dy + dz * dz;
             if (k == 0) cell.Tolerance = 1e-12 * Math.Sqrt(d2);
             cell.Clip(dx, dy, dz, 0.5 * d2, k);
-            Assert.True(double.IsFinite(cell.MaxRadiusSquared), $"extent not finite after clip {k}");
+            afterEach?.Invoke(cell, k);
             half.Add((dx, dy, dz, 0.5 * d2));
         }
-        for (int v = 0; v < cell.TriangleCount; v++)
-            Assert.True(double.IsFinite(cell.Vx[v]) && double.IsFinite(cell.Vy[v]) && double.IsFinite(cell.Vz[v]), $"vertex {v}");
-        AssertInside(cell, half, 1e-9 * Math.Sqrt(cell.MaxRadiusSquared));
+        return (cell, half);
     }
 
     // Every vertex of the cell within `slack` (length) of every half-space n·x ≤ d given.
