@@ -110,19 +110,42 @@ public sealed class KdTree
     public int CollectInShell(double x, double y, double z, double innerSquared, double outerSquared, int excludeSlot, NeighbourBuffer buffer)
     {
         ArgumentNullException.ThrowIfNull(buffer);
+        return CollectInShellNearBalls(x, y, z, innerSquared, outerSquared, excludeSlot, buffer, [], [], [], []);
+    }
+
+    private static double Near(double q, double lo, double hi) => q < lo ? lo - q : q > hi ? q - hi : 0.0;
+
+    /// <summary>
+    /// <see cref="CollectInShell"/> restricted to the union of the balls centred at <paramref name="cx"/>,
+    /// <paramref name="cy"/>, <paramref name="cz"/> (relative to the query) with squared radii <paramref name="cr2"/>:
+    /// subtrees whose box meets none of them are skipped, points are filtered by the shell only. For a convex Voronoi
+    /// cell with vertices v (relative to its generator) the balls B(v, |v|) hold every point whose bisector can still cut
+    /// it, so an elongated cell reaching into a sparse region does not gather the whole dense region its isotropic
+    /// security ball would cover. No balls: no restriction.
+    /// </summary>
+    internal int CollectInShellNearBalls(double x, double y, double z, double innerSquared, double outerSquared, int excludeSlot, NeighbourBuffer buffer,
+        ReadOnlySpan<double> cx, ReadOnlySpan<double> cy, ReadOnlySpan<double> cz, ReadOnlySpan<double> cr2)
+    {
         if (!(outerSquared > innerSquared) || NodeCount == 0) return 0;
         int before = buffer.Count;
-        // Median splits halve the points at every level, so the depth is at most log2(N) + 1 and the stack 2 per level.
         Span<int> stack = stackalloc int[128];
         int top = 0;
         stack[top++] = 0;
         while (top > 0)
         {
             int node = stack[--top];
-            double nx = Near(x, BoxMinX[node], BoxMaxX[node]), ny = Near(y, BoxMinY[node], BoxMaxY[node]), nz = Near(z, BoxMinZ[node], BoxMaxZ[node]);
+            double lx = BoxMinX[node] - x, hx = BoxMaxX[node] - x, ly = BoxMinY[node] - y, hy = BoxMaxY[node] - y, lz = BoxMinZ[node] - z, hz = BoxMaxZ[node] - z;
+            double nx = Near(0, lx, hx), ny = Near(0, ly, hy), nz = Near(0, lz, hz);
             if (nx * nx + ny * ny + nz * nz >= outerSquared) continue;
-            double fx = Math.Max(x - BoxMinX[node], BoxMaxX[node] - x), fy = Math.Max(y - BoxMinY[node], BoxMaxY[node] - y), fz = Math.Max(z - BoxMinZ[node], BoxMaxZ[node] - z);
+            double fx = Math.Max(-lx, hx), fy = Math.Max(-ly, hy), fz = Math.Max(-lz, hz);
             if (fx * fx + fy * fy + fz * fz < innerSquared) continue;
+            bool meets = cx.Length == 0;
+            for (int k = 0; k < cx.Length && !meets; k++)
+            {
+                double ex = Near(cx[k], lx, hx), ey = Near(cy[k], ly, hy), ez = Near(cz[k], lz, hz);
+                meets = ex * ex + ey * ey + ez * ez < cr2[k];
+            }
+            if (!meets) continue;
             int left = Left[node];
             if (left < 0)
             {
@@ -134,8 +157,6 @@ public sealed class KdTree
         }
         return buffer.Count - before;
     }
-
-    private static double Near(double q, double lo, double hi) => q < lo ? lo - q : q > hi ? q - hi : 0.0;
 
     /// <summary>A reusable query over this tree (one per thread).</summary>
     public KdTreeSearch CreateSearch() => new(this);

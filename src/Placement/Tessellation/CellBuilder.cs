@@ -25,6 +25,11 @@ internal sealed class CellBuilder
     private readonly double _diagonal2;
     private double _lastSecurity;
     private int[] _order = new int[256];
+    private double[] _ballR2 = new double[128];
+    private readonly KdTreeSearch? _search;
+    private const int FirstNeighbours = 20;
+    private readonly int[] _nearSlots = new int[FirstNeighbours];
+    private readonly double[] _nearD2 = new double[FirstNeighbours];
     private int[] _bucketOf = new int[256];
     private readonly double _duplicate2;
     private readonly int[] _selfCodes = new int[6];
@@ -40,6 +45,7 @@ internal sealed class CellBuilder
         if (tree is not null)
         {
             _px = tree.SortedX; _py = tree.SortedY; _pz = tree.SortedZ; _index = tree.SortedIndex;
+            _search = tree.CreateSearch();
             _firstRadius = 2.5 * spacing;
         }
         else
@@ -104,6 +110,14 @@ internal sealed class CellBuilder
         var cell = _cell;
         double inner2 = 0;
         double outer = _lastSecurity > 0 ? _lastSecurity : _firstRadius;
+        if (_search is not null)
+        {
+            // On the tree (strongly uneven sets) the previous cell says little about this one: its security radius may
+            // span a dense region next to a sparse one. Start from the local spacing instead: 1.5 × the distance to the
+            // FirstNeighbours-th nearest point.
+            int found = _search.Nearest(gx, gy, gz, self, _nearSlots, _nearD2);
+            if (found > 0) outer = 1.5 * Math.Sqrt(_nearD2[found - 1]);
+        }
         var buffer = _buffer;
         var index = _index;
         bool preclipped = false;
@@ -112,8 +126,17 @@ internal sealed class CellBuilder
             double outer2 = outer * outer;
             buffer.Clear();
             if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
-            else _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
-            var order = NearFirstOrder(buffer, inner2, outer2);
+            else if (inner2 == 0) _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            else
+            {
+                // Later shells on the tree: only where a point can still cut the cell (inside a ball centred at a vertex
+                // through the generator, slightly enlarged against rounding).
+                var vr2 = cell.VertexRadiusSquared;
+                if (_ballR2.Length < vr2.Length) _ballR2 = new double[Math.Max(vr2.Length, 2 * _ballR2.Length)];
+                for (int k = 0; k < vr2.Length; k++) _ballR2[k] = vr2[k] * (1 + 1e-6);
+                _tree!.CollectInShellNearBalls(gx, gy, gz, inner2, outer2, slot, buffer, cell.Vx, cell.Vy, cell.Vz, _ballR2.AsSpan(0, vr2.Length));
+            }
+            var order = inner2 > 0 && _tree is not null ? DeepestCutFirstOrder(buffer, cell) : NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
             {
@@ -133,8 +156,10 @@ internal sealed class CellBuilder
             }
             if (security2 <= outer2 || (_domain.Kind != DomainKind.PeriodicBox && outer2 > _diagonal2)) break;
             inner2 = outer2;
-            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever.
-            outer = Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
+            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever. On the tree
+            // the gather is limited to where points can still cut, so it reaches the security radius at once; on the
+            // grid it at most doubles per round.
+            outer = _tree is not null ? Math.Sqrt(security2) * (1 + 1e-9) : Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
         }
         _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
     }
@@ -194,6 +219,46 @@ internal sealed class CellBuilder
         for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
         return _order.AsSpan(0, n);
     }
+
+    // Indices of the buffer's neighbours ordered by how far the cell's farthest vertex lies beyond their bisector, deepest
+    // first (16 buckets; those not reaching it last). For a later shell on the tree: a cell that is still a long wedge
+    // into a sparse region is capped first by the far point that cuts its tip, after which most of the many nearer
+    // points gathered beside it fail the cheap security test instead of each trimming the tip a little.
+    private ReadOnlySpan<int> DeepestCutFirstOrder(NeighbourBuffer buffer, ConvexCell cell)
+    {
+        const int buckets = 16;
+        int n = buffer.Count;
+        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
+        var vr2 = cell.VertexRadiusSquared;
+        int far = 0;
+        for (int t = 1; t < vr2.Length; t++) if (vr2[t] > vr2[far]) far = t;
+        double fx = cell.Vx[far], fy = cell.Vy[far], fz = cell.Vz[far];
+        var d2 = buffer.DistanceSquared; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
+        if (_depth.Length < n) _depth = new double[_order.Length];
+        double top = 0;
+        for (int i = 0; i < n; i++)
+        {
+            // (q·v − |q|²/2)/|q|: the distance of v beyond the bisector of q (negative: v is kept).
+            double depth = (bx[i] * fx + by[i] * fy + bz[i] * fz - 0.5 * d2[i]) / Math.Sqrt(d2[i]);
+            _depth[i] = depth;
+            top = Math.Max(top, depth);
+        }
+        Span<int> start = stackalloc int[buckets + 2];
+        start.Clear();
+        double scale = top > 0 ? buckets / top : 0;
+        for (int i = 0; i < n; i++)
+        {
+            // Bucket 0 holds the deepest cuts; bucket `buckets` those that do not reach the farthest vertex.
+            int k = _depth[i] > 0 ? Math.Clamp((int)((top - _depth[i]) * scale), 0, buckets - 1) : buckets;
+            _bucketOf[i] = k;
+            start[k + 1]++;
+        }
+        for (int k = 0; k <= buckets; k++) start[k + 1] += start[k];
+        for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
+        return _order.AsSpan(0, n);
+    }
+
+    private double[] _depth = new double[256];
 
     private void ClipToSphere(double gx, double gy, double gz, double tolerance)
     {

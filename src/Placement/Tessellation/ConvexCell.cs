@@ -64,6 +64,7 @@ internal sealed class ConvexCell
     public ReadOnlySpan<double> Vx => _vx.AsSpan(0, _triCount);
     public ReadOnlySpan<double> Vy => _vy.AsSpan(0, _triCount);
     public ReadOnlySpan<double> Vz => _vz.AsSpan(0, _triCount);
+    public ReadOnlySpan<double> VertexRadiusSquared => _vr2.AsSpan(0, _triCount);
 
     /// <summary>
     /// Resets to the box [lo, hi] (relative to the generator; lo &lt; 0 &lt; hi not required but lo &lt; hi), with
