@@ -202,20 +202,29 @@ internal sealed class CellBuilder
     // only once every point inside the security radius was used); near-first only keeps the cell small early.
     private ReadOnlySpan<int> NearFirstOrder(NeighbourBuffer buffer, double inner2, double outer2)
     {
-        const int buckets = 16;
         int n = buffer.Count;
-        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
-        Span<int> start = stackalloc int[buckets + 1];
-        start.Clear();
+        EnsureOrder(n);
         var d2 = buffer.DistanceSquared;
-        double scale = buckets / (outer2 - inner2);
-        for (int i = 0; i < n; i++)
-        {
-            int k = Math.Clamp((int)((d2[i] - inner2) * scale), 0, buckets - 1);
-            _bucketOf[i] = k;
-            start[k + 1]++;
-        }
-        for (int k = 0; k < buckets; k++) start[k + 1] += start[k];
+        double scale = Buckets / (outer2 - inner2);
+        for (int i = 0; i < n; i++) _bucketOf[i] = Math.Clamp((int)((d2[i] - inner2) * scale), 0, Buckets - 1);
+        return BucketOrder(n);
+    }
+
+    // Buckets of the near-first and deepest-cut orders (one more, last, for the deepest-cut order's non-cutting points).
+    private const int Buckets = 16;
+
+    private void EnsureOrder(int n)
+    {
+        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
+    }
+
+    // Counting sort of 0 … n−1 by _bucketOf (values 0 … Buckets), stable within a bucket.
+    private ReadOnlySpan<int> BucketOrder(int n)
+    {
+        Span<int> start = stackalloc int[Buckets + 2];
+        start.Clear();
+        for (int i = 0; i < n; i++) start[_bucketOf[i] + 1]++;
+        for (int k = 0; k <= Buckets; k++) start[k + 1] += start[k];
         for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
         return _order.AsSpan(0, n);
     }
@@ -226,9 +235,8 @@ internal sealed class CellBuilder
     // points gathered beside it fail the cheap security test instead of each trimming the tip a little.
     private ReadOnlySpan<int> DeepestCutFirstOrder(NeighbourBuffer buffer, ConvexCell cell)
     {
-        const int buckets = 16;
         int n = buffer.Count;
-        if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
+        EnsureOrder(n);
         var vr2 = cell.VertexRadiusSquared;
         int far = 0;
         for (int t = 1; t < vr2.Length; t++) if (vr2[t] > vr2[far]) far = t;
@@ -243,19 +251,10 @@ internal sealed class CellBuilder
             _depth[i] = depth;
             top = Math.Max(top, depth);
         }
-        Span<int> start = stackalloc int[buckets + 2];
-        start.Clear();
-        double scale = top > 0 ? buckets / top : 0;
-        for (int i = 0; i < n; i++)
-        {
-            // Bucket 0 holds the deepest cuts; bucket `buckets` those that do not reach the farthest vertex.
-            int k = _depth[i] > 0 ? Math.Clamp((int)((top - _depth[i]) * scale), 0, buckets - 1) : buckets;
-            _bucketOf[i] = k;
-            start[k + 1]++;
-        }
-        for (int k = 0; k <= buckets; k++) start[k + 1] += start[k];
-        for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
-        return _order.AsSpan(0, n);
+        double scale = top > 0 ? Buckets / top : 0;
+        // Bucket 0 holds the deepest cuts; bucket `Buckets` those that do not reach the farthest vertex.
+        for (int i = 0; i < n; i++) _bucketOf[i] = _depth[i] > 0 ? Math.Clamp((int)((top - _depth[i]) * scale), 0, Buckets - 1) : Buckets;
+        return BucketOrder(n);
     }
 
     private double[] _depth = new double[256];
