@@ -60,7 +60,7 @@ internal static class CompareCommand
                     report.LogRatioByRegion.BodyStandardDeviation, report.LogRatioByRegion.SurfaceStandardDeviation,
                     report.LogRatioByRegion.UncutStandardDeviation, report.RadialDensity.RmsError,
                     report.EnclosedMass.MaxRelativeError, report.Regularity.FractionCorrected, sphBias, sphRms,
-                    report.Sph?.BodySmoothedRmsError ?? double.NaN));
+                    report.Sph?.BodySmoothedRmsError ?? double.NaN, report.Sph?.ShellBodyRmsError ?? double.NaN));
             }
             if (context.Json)
             {
@@ -69,16 +69,17 @@ internal static class CompareCommand
             }
             var c = CultureInfo.InvariantCulture;
             var table = new Table().Title(Markup.Escape($"{names.Count} samplers, N = {parse.GetValue(sampling.Count):N0}, seed {parse.GetValue(sampling.Seed)}"))
-                .AddColumns("sampler", "N", "place (s)", "std ln(Vρ/m)", "body", "surface", "not cut", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms", "SPH rms vs ρ̃");
+                .AddColumns("sampler", "N", "place (s)", "std ln(Vρ/m)", "body", "surface", "not cut", "radial ρ rms", "encl. mass max", "mesh corrects", "SPH ρ bias", "SPH ρ rms", "SPH rms vs ρ̃", "SPH rms shells");
             foreach (var r in rows)
                 table.AddRow(r.Sampler, r.Points.ToString("N0", c), r.PlaceSeconds.ToString("F3", c), r.LogRatioStd.ToString("F4", c),
                     r.LogRatioStdBody.ToString("F4", c), r.LogRatioStdSurface.ToString("F4", c), r.LogRatioStdUncut.ToString("F4", c),
                     r.RadialDensityRms.ToString("P2", c), r.EnclosedMassMax.ToString("P3", c), r.FractionCorrected.ToString("P1", c),
                     double.IsNaN(r.SphBias) ? "-" : r.SphBias.ToString("+0.00%;-0.00%", c), double.IsNaN(r.SphRms) ? "-" : r.SphRms.ToString("P2", c),
-                    double.IsNaN(r.SphRmsSmoothed) ? "-" : r.SphRmsSmoothed.ToString("P2", c));
+                    double.IsNaN(r.SphRmsSmoothed) ? "-" : r.SphRmsSmoothed.ToString("P2", c),
+                    double.IsNaN(r.SphRmsShells) ? "-" : r.SphRmsShells.ToString("P2", c));
             context.Console.Write(table);
             context.Output.WriteLine("body / surface: std ln(Vρ/m) of the cells whose SPH kernel support lies inside / reaches past the outermost points (or the profile radius); not cut: every cell but the outermost layer cut by the boundary (the overall column keeps all).");
-            context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the outermost points (kernels cut by the edge read low by construction; see check --report); 'vs ρ̃' compares with the target seen through the same kernel and support, which removes the kernel's smoothing bias and leaves the placement's noise.");
+            context.Output.WriteLine("SPH columns: Wendland C2, points whose kernel support lies inside the outermost points (kernels cut by the edge read low by construction; see check --report); 'vs ρ̃' compares with the target seen through the same kernel and support, which removes the kernel's smoothing bias and leaves the placement's noise; 'shells' (sets on shells only) takes every shell but the outermost two.");
             return ExitCodes.Ok;
         });
         return command;
@@ -86,5 +87,5 @@ internal static class CompareCommand
 
     private sealed record CompareRow(string Sampler, int Points, double PlaceSeconds, double LogRatioStd, double LogRatioStdBody,
         double LogRatioStdSurface, double LogRatioStdUncut, double RadialDensityRms,
-        double EnclosedMassMax, double FractionCorrected, double SphBias, double SphRms, double SphRmsSmoothed);
+        double EnclosedMassMax, double FractionCorrected, double SphBias, double SphRms, double SphRmsSmoothed, double SphRmsShells);
 }

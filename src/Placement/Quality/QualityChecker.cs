@@ -101,7 +101,7 @@ public static class QualityChecker
             RadialDensity(profile, radius, mass, cells, options.RadialBins),
             Enclosed(profile, radius, mass),
             Regularity(cells, options),
-            sph is null ? null : SphComparison(sph, profile, radius, rho, edge, options),
+            sph is null ? null : SphComparison(sph, profile, radius, rho, edge, OuterShells(points, radius), options),
             options.KeepPerPointValues ? logRatio : null,
             null);
     }
@@ -233,13 +233,17 @@ public static class QualityChecker
             cutCount, Mean(cutSum, cutCount), Std(cutSum, cutSum2, cutCount), Std(inSum, inSum2, inCount), outer);
     }
 
-    private static SphDensityComparison SphComparison(Sph.SphDensityResult sph, IRadialProfile profile, double[] radius, double[] rho, double edge, QualityOptions options)
+    private static SphDensityComparison SphComparison(Sph.SphDensityResult sph, IRadialProfile profile, double[] radius, double[] rho, double edge,
+        bool[]? outerShell, QualityOptions options)
     {
         int bins = options.RadialBins;
         var edges = EqualMassEdges(profile, bins);
         var target = new Moments(bins);
         double[]? smoothed = options.SphSmoothedTarget ? Sph.KernelSmoothedProfile.Compute(profile, options.SphKernel, radius, sph.Support) : null;
         var versusSmoothed = new Moments(bins);
+        // By shells (null when the set is not on shells): Body = all but the outermost two, Surface = those two.
+        var byShell = new Moments(0);
+        var byShellSmoothed = new Moments(0);
         double big = edge;
         for (int i = 0; i < radius.Length; i++)
         {
@@ -248,6 +252,9 @@ public static class QualityChecker
             bool body = radius[i] + sph.Support[i] < big;
             target.Add(k, body, sph.Density[i] / rho[i] - 1);
             if (smoothed is not null && smoothed[i] > 0) versusSmoothed.Add(k, body, sph.Density[i] / smoothed[i] - 1);
+            if (outerShell is null) continue;
+            byShell.Add(-1, !outerShell[i], sph.Density[i] / rho[i] - 1);
+            if (smoothed is not null && smoothed[i] > 0) byShellSmoothed.Add(-1, !outerShell[i], sph.Density[i] / smoothed[i] - 1);
         }
         var (bias, scatter) = target.PerBin();
         return new SphDensityComparison(options.SphKernel.Name, options.SphNeighbourNumber, edges[..^1], edges[1..], bias, scatter, target.Count,
@@ -256,7 +263,37 @@ public static class QualityChecker
             smoothed is null ? double.NaN : versusSmoothed.Body.Mean,
             smoothed is null ? double.NaN : versusSmoothed.Body.Rms,
             smoothed is null ? double.NaN : versusSmoothed.Surface.Rms,
-            edge);
+            edge,
+            byShell.Body.N, byShell.Body.Rms, smoothed is null ? double.NaN : byShellSmoothed.Body.Rms,
+            byShell.Surface.N, byShell.Surface.Rms);
+    }
+
+    /// <summary>
+    /// For a set on shells, marks the points of the outermost two shells; null for any other set. A set is on shells when
+    /// every point carries a layer index (≥ 0), there are at least three layers, and each layer's points share one radius
+    /// (to 1e-9 relative): the layers of a shell sampler, kept by relaxations that move points only tangentially.
+    /// </summary>
+    private static bool[]? OuterShells(PointSet points, double[] radius)
+    {
+        var layer = points.Layer;
+        var lo = new Dictionary<int, double>();
+        var hi = new Dictionary<int, double>();
+        for (int i = 0; i < radius.Length; i++)
+        {
+            int l = layer[i];
+            if (l < 0) return null;
+            double r = radius[i];
+            lo[l] = lo.TryGetValue(l, out double a) ? Math.Min(a, r) : r;
+            hi[l] = hi.TryGetValue(l, out double b) ? Math.Max(b, r) : r;
+        }
+        if (lo.Count < 3) return null;
+        foreach (var (l, r) in hi)
+            if (r - lo[l] > 1e-9 * r) return null;
+        // The two layers of largest radius (ties between layers cannot occur on distinct shells; ordered by index then).
+        var outer = hi.OrderByDescending(kv => kv.Value).ThenByDescending(kv => kv.Key).Take(2).Select(kv => kv.Key).ToHashSet();
+        var mask = new bool[radius.Length];
+        for (int i = 0; i < mask.Length; i++) mask[i] = outer.Contains(layer[i]);
+        return mask;
     }
 
     /// <summary>Sums of e and e² per radial bin and over the body / surface points.</summary>

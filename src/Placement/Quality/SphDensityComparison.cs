@@ -28,6 +28,13 @@ namespace Placement.Quality;
 /// <param name="BodySmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the body points (NaN when not computed).</param>
 /// <param name="SurfaceSmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the surface points, whose kernels ρ̃ truncates the same way (NaN when not computed).</param>
 /// <param name="EdgeRadius">R_edge of the body/surface split, length units (NaN when not recorded).</param>
+/// <param name="ShellBodyPoints">For a set on shells (every point's layer a shell at one radius, at least three shells): the points
+/// of all shells but the outermost two; 0 otherwise. The split by shells (the outermost two excluded and reported apart) is the
+/// usual way to quote a shell placement's body; the kernel split above is the one every set has.</param>
+/// <param name="ShellBodyRmsError">rms of ρ_SPH/ρ_target − 1 over <paramref name="ShellBodyPoints"/> (NaN when not a shell set).</param>
+/// <param name="ShellBodySmoothedRmsError">rms of ρ_SPH/ρ̃ − 1 over the same points (NaN when not a shell set or ρ̃ not computed).</param>
+/// <param name="OuterShellPoints">Points of the outermost two shells (0 when not a shell set).</param>
+/// <param name="OuterShellRmsError">rms of ρ_SPH/ρ_target − 1 over the outermost two shells (NaN when not a shell set).</param>
 public sealed record SphDensityComparison(
     string Kernel,
     double NeighbourNumber,
@@ -46,4 +53,9 @@ public sealed record SphDensityComparison(
     double BodySmoothedBias = double.NaN,
     double BodySmoothedRmsError = double.NaN,
     double SurfaceSmoothedRmsError = double.NaN,
-    double EdgeRadius = double.NaN);
+    double EdgeRadius = double.NaN,
+    int ShellBodyPoints = 0,
+    double ShellBodyRmsError = double.NaN,
+    double ShellBodySmoothedRmsError = double.NaN,
+    int OuterShellPoints = 0,
+    double OuterShellRmsError = double.NaN);

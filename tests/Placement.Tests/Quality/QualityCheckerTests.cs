@@ -175,4 +175,38 @@ public class QualityCheckerTests
         Assert.True(sph.SurfacePoints >= outerShell && outerShell > 0);
         Assert.True(sph.BodyPoints > 0);
     }
+
+    [Fact]
+    public void SphSplitByShells_ExcludesTheOutermostTwoShells_OnlyForSetsOnShells()
+    {
+        // A HEALPix-shell set of the n = 3/2 polytrope: its layers are shells, so the SPH error is also quoted over all
+        // shells but the outermost two, and over those two apart. Recomputed here from the same SPH estimate.
+        var profile = new Polytrope(1.5, 1, 1);
+        var points = Placement.Samplers.PointSampling.Place(new Placement.Samplers.Shells.HealpixShellSampler(), new Placement.Samplers.SamplingRequest(profile, 4000)).Points;
+        var options = QualityOptions.Default with { SphSmoothedTarget = false };
+        var report = QualityChecker.Evaluate(points, profile, options: options);
+        var sph = report.Sph!;
+        var estimate = Placement.Sph.SphDensity.Compute(points, Placement.Sph.SphKernel.WendlandC2, options.SphNeighbourNumber);
+        int top = points.Layer.Max();
+        double inner = 0, outer = 0; int nInner = 0, nOuter = 0;
+        for (int i = 0; i < points.Count; i++)
+        {
+            double e = estimate.Density[i] / profile.Density(points.Radius(i)) - 1;
+            if (points.Layer[i] >= top - 1) { outer += e * e; nOuter++; } else { inner += e * e; nInner++; }
+        }
+        Assert.True(nOuter > 0 && nInner > nOuter);
+        Assert.Equal(nInner, sph.ShellBodyPoints);
+        Assert.Equal(nOuter, sph.OuterShellPoints);
+        Assert.Equal(Math.Sqrt(inner / nInner), sph.ShellBodyRmsError, 12);
+        Assert.Equal(Math.Sqrt(outer / nOuter), sph.OuterShellRmsError, 12);
+        Assert.True(double.IsNaN(sph.ShellBodySmoothedRmsError)); // ρ̃ switched off
+        var back = QualityJson.Deserialize(QualityJson.Serialize(report)).Sph!;
+        Assert.Equal((sph.ShellBodyPoints, sph.ShellBodyRmsError, sph.OuterShellRmsError), (back.ShellBodyPoints, back.ShellBodyRmsError, back.OuterShellRmsError));
+
+        // The same points with one point moved off its shell's radius: no longer a set on shells, nothing split by shells.
+        points.X[0] *= 1.01; points.Y[0] *= 1.01; points.Z[0] *= 1.01;
+        var moved = QualityChecker.Evaluate(points, profile, options: options).Sph!;
+        Assert.Equal(0, moved.ShellBodyPoints);
+        Assert.True(double.IsNaN(moved.ShellBodyRmsError) && double.IsNaN(moved.OuterShellRmsError));
+    }
 }
