@@ -26,7 +26,7 @@ namespace Placement.Tessellation;
 /// </remarks>
 internal sealed class ConvexCell
 {
-    private double[] _nx = new double[64], _ny = new double[64], _nz = new double[64], _d = new double[64];
+    private double[] _nx = new double[64], _ny = new double[64], _nz = new double[64], _d = new double[64], _n2 = new double[64];
     private int[] _neighbour = new int[64];
     private int _planeCount;
 
@@ -104,7 +104,7 @@ internal sealed class ConvexCell
         if (_planeCount == _nx.Length) GrowPlanes();
         if (_planeCount >= short.MaxValue) throw new InvalidOperationException("A cell exceeded 32767 planes (edge keys pack plane indices in 16 bits).");
         int p = _planeCount++;
-        _nx[p] = nx; _ny[p] = ny; _nz[p] = nz; _d[p] = d; _neighbour[p] = neighbour;
+        _nx[p] = nx; _ny[p] = ny; _nz[p] = nz; _d[p] = d; _n2[p] = nx * nx + ny * ny + nz * nz; _neighbour[p] = neighbour;
         return p;
     }
 
@@ -259,14 +259,20 @@ internal sealed class ConvexCell
         bool ok = _planeCount <= 64 ? BoundaryByMasks(stamp, ref boundary, ref first) : BoundaryByEdges(stamp, ref boundary, ref first);
         if (!ok || boundary < 3) return false;
         // Walk the cycle once to check it is a single loop through every boundary edge, and that every new vertex is
-        // defined: planes x, next[x] and the new one must meet in one point (a zero determinant, possible only at a
-        // degenerate edge, would make the vertex NaN and the cell's extent with it).
+        // defined: planes x, next[x] and the new one must meet in one point that lies on all three. At a degenerate edge
+        // they may not: a zero determinant makes the vertex NaN, and nearly dependent planes (the bisectors of points on
+        // one circle — a ring of a shell — all contain its axis, so three of them share a line) give a finite point far
+        // off its planes that would silently cut the cell short. Such a clip is refused like a broken cycle and retried.
+        double n2 = nx * nx + ny * ny + nz * nz;
         int steps = 0, x = first;
         do
         {
             if (_nextStamp[x] != stamp) return false;
-            if (!double.IsFinite(1.0 / TripleProduct(x, _next[x], nx, ny, nz))) return false;
-            x = _next[x];
+            int y = _next[x];
+            double det = TripleProduct(x, y, nx, ny, nz);
+            if (!double.IsFinite(1.0 / det)) return false;
+            if (det * det < IllConditioned * _n2[x] * _n2[y] * n2 && !VertexOnPlanes(x, y, nx, ny, nz, d)) return false;
+            x = y;
             steps++;
         } while (x != first && steps <= boundary);
         if (steps != boundary || x != first) return false;
@@ -396,6 +402,32 @@ internal sealed class ConvexCell
         return _nx[a] * bcx + _ny[a] * bcy + _nz[a] * bcz;
     }
 
+    // Squared relative determinant |n_a·(n_b × n_c)|² / (|n_a|²|n_b|²|n_c|²) below which a new vertex is checked against
+    // its planes: above it rounding moves the vertex by at most ~1e-10 of the lengths involved.
+    private const double IllConditioned = 1e-12;
+
+    // Relative residual beyond which a computed vertex counts as off its planes: a sound vertex is off by ~1e-16 of the
+    // lengths involved.
+    private const double VertexResidual = 1e-9;
+
+    // Whether the point where stored planes a, b and the new plane (n, d) meet, as SetVertex computes it, lies on all
+    // three: residuals n·v − d within VertexResidual (|v| + |d|/|n|) + Tolerance as lengths (squared, with
+    // (x + y + z)² ≤ 3(x² + y² + z²), so no root is taken).
+    private bool VertexOnPlanes(int a, int b, double cx, double cy, double cz, double dc)
+    {
+        double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], da = _d[a], db = _d[b];
+        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
+        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
+        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
+        double inv = 1.0 / (ax * bcx + ay * bcy + az * bcz);
+        double vx = (da * bcx + db * cax + dc * abx) * inv, vy = (da * bcy + db * cay + dc * aby) * inv, vz = (da * bcz + db * caz + dc * abz) * inv;
+        double e2 = VertexResidual * VertexResidual, base2 = e2 * (vx * vx + vy * vy + vz * vz) + Tolerance * Tolerance;
+        double ra = ax * vx + ay * vy + az * vz - da, rb = bx * vx + by * vy + bz * vz - db, rc = cx * vx + cy * vy + cz * vz - dc;
+        return ra * ra <= 3 * (_n2[a] * base2 + e2 * da * da)
+            && rb * rb <= 3 * (_n2[b] * base2 + e2 * db * db)
+            && rc * rc <= 3 * (cx * cx + cy * cy + cz * cz) * base2 + 3 * e2 * dc * dc;
+    }
+
     // Sets the vertex of triangle t, where planes a, b and c meet, and returns its squared distance from the generator.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private double SetVertex(int t, int a, int b, int c)
@@ -470,7 +502,7 @@ internal sealed class ConvexCell
     private void GrowPlanes()
     {
         int n = _nx.Length * 2;
-        Array.Resize(ref _nx, n); Array.Resize(ref _ny, n); Array.Resize(ref _nz, n); Array.Resize(ref _d, n);
+        Array.Resize(ref _nx, n); Array.Resize(ref _ny, n); Array.Resize(ref _nz, n); Array.Resize(ref _d, n); Array.Resize(ref _n2, n);
         Array.Resize(ref _neighbour, n);
     }
 
