@@ -27,6 +27,12 @@ internal sealed class CellBuilder
     private int[] _order = new int[256];
     private double[] _ballR2 = new double[128];
     private readonly KdTreeSearch? _search;
+    private readonly Lazy<FarIndex>? _farTree;
+
+    // A grid cell still unfinished once its shells would pass this multiple of its first shell's radius gathers the rest
+    // from the far tree, restricted to the vertex balls: the isotropic shells of the grid would sweep a dense region
+    // next to a wedge-shaped cell reaching into a sparse one (the dense side of a large density step).
+    private const double FarShellFactor = 3.0;
     private const int FirstNeighbours = 20;
     private readonly int[] _nearSlots = new int[FirstNeighbours];
     private readonly double[] _nearD2 = new double[FirstNeighbours];
@@ -35,11 +41,17 @@ internal sealed class CellBuilder
     private readonly int[] _selfCodes = new int[6];
     private double[] _faceArea = new double[64], _faceH = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
 
-    /// <summary>A builder over a uniform grid (<paramref name="tree"/> null) or over a k-d tree (<paramref name="grid"/> null).</summary>
-    public CellBuilder(PointGrid? grid, KdTree? tree, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing)
+    /// <summary>
+    /// A builder over a uniform grid (<paramref name="tree"/> null) or over a k-d tree (<paramref name="grid"/> null). On the grid,
+    /// <paramref name="farTree"/> (built on first use, shared by all builders) serves the far shells of cells that reach far
+    /// beyond their first shell.
+    /// </summary>
+    public CellBuilder(PointGrid? grid, KdTree? tree, TessellationDomain domain, TessellationOptions options, VoronoiCells cells, double spacing,
+        Lazy<FarIndex>? farTree = null)
     {
         _grid = grid;
         _tree = tree;
+        _farTree = farTree;
         double lx = domain.MaxX - domain.MinX, ly = domain.MaxY - domain.MinY, lz = domain.MaxZ - domain.MinZ;
         _diagonal2 = lx * lx + ly * ly + lz * lz;
         if (tree is not null)
@@ -119,24 +131,32 @@ internal sealed class CellBuilder
             if (found > 0) outer = 1.5 * Math.Sqrt(_nearD2[found - 1]);
         }
         var buffer = _buffer;
-        var index = _index;
-        bool preclipped = false;
+        bool preclipped = false, wentFar = false;
+        double first = outer;
         while (true)
         {
             double outer2 = outer * outer;
             buffer.Clear();
-            if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
-            else if (inner2 == 0) _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            // Later shells from a tree (the tree path, or the far tree of a grid cell that reaches far): only where a point
+            // can still cut the cell, inside a ball centred at a vertex through the generator (slightly enlarged against
+            // rounding).
+            var tree = inner2 == 0 ? null : _tree ?? (outer > FarShellFactor * first ? _farTree?.Value.Tree : null);
+            var index = tree is null ? _index : tree.SortedIndex;
+            if (tree is null)
+            {
+                if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+                else _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+            }
             else
             {
-                // Later shells on the tree: only where a point can still cut the cell (inside a ball centred at a vertex
-                // through the generator, slightly enlarged against rounding).
                 var vr2 = cell.VertexRadiusSquared;
                 if (_ballR2.Length < vr2.Length) _ballR2 = new double[Math.Max(vr2.Length, 2 * _ballR2.Length)];
                 for (int k = 0; k < vr2.Length; k++) _ballR2[k] = vr2[k] * (1 + 1e-6);
-                _tree!.CollectInShellNearBalls(gx, gy, gz, inner2, outer2, slot, buffer, cell.Vx, cell.Vy, cell.Vz, _ballR2.AsSpan(0, vr2.Length));
+                int exclude = tree == _tree ? slot : _farTree!.Value.SlotOf[self];
+                wentFar |= tree != _tree;
+                tree.CollectInShellNearBalls(gx, gy, gz, inner2, outer2, exclude, buffer, cell.Vx, cell.Vy, cell.Vz, _ballR2.AsSpan(0, vr2.Length));
             }
-            var order = inner2 > 0 && _tree is not null ? DeepestCutFirstOrder(buffer, cell) : NearFirstOrder(buffer, inner2, outer2);
+            var order = tree is not null ? DeepestCutFirstOrder(buffer, cell) : NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
             {
@@ -156,12 +176,16 @@ internal sealed class CellBuilder
             }
             if (security2 <= outer2 || (_domain.Kind != DomainKind.PeriodicBox && outer2 > _diagonal2)) break;
             inner2 = outer2;
-            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever. On the tree
-            // the gather is limited to where points can still cut, so it reaches the security radius at once; on the
-            // grid it at most doubles per round.
-            outer = _tree is not null ? Math.Sqrt(security2) * (1 + 1e-9) : Math.Min(Math.Sqrt(security2) * (1 + 1e-9), 2.0 * outer);
+            // Slightly beyond the security radius so rounding in √ cannot leave an empty last shell forever. A tree gather
+            // is limited to where points can still cut, so it reaches the security radius at once; the grid's isotropic
+            // shells at most double per round.
+            double reach = Math.Sqrt(security2) * (1 + 1e-9);
+            outer = tree is not null || (_farTree is not null && 2.0 * outer > FarShellFactor * first) ? reach : Math.Min(reach, 2.0 * outer);
         }
-        _lastSecurity = 2.0 * Math.Sqrt(cell.MaxRadiusSquared);
+        // The next cell starts from this one's security radius (neighbours in space, so of similar size), at most
+        // FarShellFactor times this one's start, and not at all from a cell that reached far: its radius would sweep the
+        // dense region around the next cell.
+        if (!wentFar) _lastSecurity = Math.Min(2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
     }
 
     // Relative excess radius of the coarse tangent-plane pre-clip.

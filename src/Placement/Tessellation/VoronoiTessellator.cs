@@ -26,6 +26,9 @@ public sealed class VoronoiTessellator
     /// <summary>True when the last call gathered neighbours from a k-d tree rather than the uniform grid.</summary>
     public bool UsedKdTree { get; private set; }
 
+    /// <summary>True when the last call, on the grid, built a k-d tree for the far shells of cells reaching far.</summary>
+    internal bool BuiltFarIndex { get; private set; }
+
     /// <summary>The region this tessellator fills.</summary>
     public TessellationDomain Domain => _domain;
 
@@ -90,6 +93,8 @@ public sealed class VoronoiTessellator
         };
         var tree = useTree ? new KdTree(x, y, z) : null;
         UsedKdTree = useTree;
+        // On the grid, cells that reach far (the dense side of a large density step) take their far shells from a tree.
+        var far = useTree || domain.Kind == DomainKind.PeriodicBox ? null : new Lazy<FarIndex>(() => new FarIndex(x, y, z));
 
         var settings = options.Parallel ?? ParallelSettings.Default;
         int chunk = ParallelLoop.ChunkSize(n, Math.Min(settings.MinimumChunk, 2048));
@@ -110,7 +115,7 @@ public sealed class VoronoiTessellator
             ParallelLoop.For(n, loopSettings, (start, end) =>
             {
                 if (!pool.TryTake(out var worker))
-                    worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing) : new CellBuilder(null, tree, domain, options, cells, spacing);
+                    worker = tree is null ? new CellBuilder(grid, null, domain, options, cells, spacing, far) : new CellBuilder(null, tree, domain, options, cells, spacing);
                 worker.BeginChunk();
                 FaceBuffer? faces = chunkFaces is null ? null : new FaceBuffer();
                 for (int k = start; k < end; k++)
@@ -134,6 +139,7 @@ public sealed class VoronoiTessellator
             ExceptionDispatchInfo.Capture(ae.InnerExceptions[0]).Throw();
             throw;
         }
+        BuiltFarIndex = far is { IsValueCreated: true };
         cells.PlanesTested = tested;
         cells.PlanesCut = cut;
         if (chunkFaces is not null) AssembleFaces(cells, index, order, chunkFaces, chunk);
