@@ -197,6 +197,33 @@ public class ShellLayoutTests
     }
 
     [Fact]
+    public void DenseCoreUnderASparseLayer_GetsNoThickFlankShell()
+    {
+        // An invented body (not a real star): a core 1e4 times denser than its envelope, inside r = 0.1 R, holding ~96 %
+        // of the mass. Beyond the step a flank shell of 12 points is several times thicker than the designed flank
+        // thickness, and mirroring it about the step used to pull 46128 of 5e4 points into one inner flank shell of
+        // aspect 50 (radial density 45 % off, the tessellation 85 s). Without flanks the core fills with near-cubic shells.
+        var r = new List<double>();
+        var rho = new List<double>();
+        for (int i = 0; i <= 50; i++) { double x = 0.1 * i / 50; r.Add(x); rho.Add(1e4 * (1 - x * x)); }
+        for (int i = 0; i <= 100; i++) { double x = 0.1 + 0.9 * i / 100; r.Add(x); rho.Add(Math.Max(1 - x * x, 1e-4)); }
+        var body = new TabulatedProfile(r, rho, Placement.Units.UnitSystem.Dimensionless);
+        var layout = ShellLayout.Build(body, 50_000);
+        layout.CheckValidity(body, 1e-12);
+        int largest = 0;
+        for (int k = 0; k < layout.ShellCount; k++)
+        {
+            largest = Math.Max(largest, layout.ShellPointCount(k));
+            // Inside the core (between its first shells and the step) the shells keep near-cubic cells.
+            if (layout.OuterRadius[k] <= 0.1 && layout.InnerRadius[k] > 0.02)
+                Assert.InRange(layout.Aspect(k), 0.5, 2.0);
+        }
+        Assert.True(largest < 0.2 * layout.Count, $"largest shell holds {largest} points");
+        // One shell boundary lies on the step (to the rounding of six points' mass).
+        Assert.Contains(layout.OuterRadius, b => Math.Abs(b - 0.1) < 1e-3);
+    }
+
+    [Fact]
     public void ShellLayout_IgnoresAStepAboveWhichLessThanOneShellRemains()
     {
         // The layered-planet sample (invented): its gas envelope above the 6000 km step holds ~1e-3 of the mass, less

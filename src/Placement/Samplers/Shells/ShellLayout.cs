@@ -20,7 +20,7 @@ namespace Placement.Samplers.Shells;
 /// shell straddling a step would put its points' cells across two densities (ln(Vρ/m) of order the log contrast for
 /// a whole shell). The step's boundary falls at the count c + 12j nearest to M(r_s)/m, so within six points' mass of
 /// the step; the two shells flanking it have their points mirrored about it, so the Voronoi face between them lies on
-/// the step. In each segment the outward pass stops when the remaining mass cannot fill a shell of the target
+/// the step (not where the light side is so sparse that even a 12-point flank is over twice the designed thickness). In each segment the outward pass stops when the remaining mass cannot fill a shell of the target
 /// aspect; then the last six shells are re-chosen together with the remainder (as one more shell, or spread over them when it is
 /// small) so that 12 Σ N_k² matches the count exactly, each N_k as close as possible (relative error) to its
 /// greedy value; a search over nearby integers finds such sums (more parts and wider windows are tried if the
@@ -180,7 +180,7 @@ public sealed class ShellLayout
                 long below = ends[k].End - (k == 0 ? c : ends[k - 1].End), above = ends[k + 1].End - ends[k].End;
                 long belowUsed = Points(inner[k]) + (k > 0 ? Points(outer[k - 1]) : 0);
                 long aboveUsed = Points(outer[k]) + (k + 1 < steps ? Points(inner[k + 1]) : 0);
-                if (belowUsed >= below || aboveUsed >= above) inner[k] = outer[k] = 0;
+                if (belowUsed >= below || aboveUsed >= above || inner[k] == 0 || outer[k] == 0) inner[k] = outer[k] = 0;
             }
             // The last placed layer (the central cluster, or none when c = 0): the inner neighbour of the next shell when
             // predicting where the Voronoi faces between shells fall.
@@ -223,6 +223,11 @@ public sealed class ShellLayout
             double rb = RadiusAt(boundary);
             double light = profile.EnclosedMass(Math.Min(rb + t, profile.OuterRadius)) - profile.EnclosedMass(rb);
             int nOut = Math.Max(1, (int)Math.Round(Math.Sqrt(light / (12 * _m))));
+            // Where the light side holds much less than a shell of 12 points in the designed thickness (a sparse layer over
+            // a dense one, e.g. a 1e4 step with few points beyond it), the outer flank is far thicker than t, and its mirror
+            // image would pull the dense side's mass from deep inside into one thick inner flank (seen: 46128 of 5e4
+            // points on one shell of aspect 50). No flanks then (0); the step still falls on a shell boundary.
+            if (!(RadiusAt(boundary + 12.0 * nOut * nOut) - rb <= 2 * t)) return 0;
             if (outward) return nOut;
             // The inner flank is matched to the outer one as rounded (its N_side is the coarser): its mass midpoint goes to
             // the mirror image of the outer flank's points, 2 r_b − p_out, so the bisector between them is the step.
