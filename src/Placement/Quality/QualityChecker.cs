@@ -241,9 +241,8 @@ public static class QualityChecker
         var target = new Moments(bins);
         double[]? smoothed = options.SphSmoothedTarget ? Sph.KernelSmoothedProfile.Compute(profile, options.SphKernel, radius, sph.Support) : null;
         var versusSmoothed = new Moments(bins);
-        // By shells (null when the set is not on shells): Body = all but the outermost two, Surface = those two.
-        var byShell = new Moments(0);
-        var byShellSmoothed = new Moments(0);
+        // By shells (only when the set is on shells): all but the outermost two, and those two.
+        Accumulator shellBody = new(), shellBodySmoothed = new(), outerShells = new();
         double big = edge;
         for (int i = 0; i < radius.Length; i++)
         {
@@ -253,8 +252,9 @@ public static class QualityChecker
             target.Add(k, body, sph.Density[i] / rho[i] - 1);
             if (smoothed is not null && smoothed[i] > 0) versusSmoothed.Add(k, body, sph.Density[i] / smoothed[i] - 1);
             if (outerShell is null) continue;
-            byShell.Add(-1, !outerShell[i], sph.Density[i] / rho[i] - 1);
-            if (smoothed is not null && smoothed[i] > 0) byShellSmoothed.Add(-1, !outerShell[i], sph.Density[i] / smoothed[i] - 1);
+            if (outerShell[i]) { outerShells.Add(sph.Density[i] / rho[i] - 1); continue; }
+            shellBody.Add(sph.Density[i] / rho[i] - 1);
+            if (smoothed is not null && smoothed[i] > 0) shellBodySmoothed.Add(sph.Density[i] / smoothed[i] - 1);
         }
         var (bias, scatter) = target.PerBin();
         return new SphDensityComparison(options.SphKernel.Name, options.SphNeighbourNumber, edges[..^1], edges[1..], bias, scatter, target.Count,
@@ -264,8 +264,8 @@ public static class QualityChecker
             smoothed is null ? double.NaN : versusSmoothed.Body.Rms,
             smoothed is null ? double.NaN : versusSmoothed.Surface.Rms,
             edge,
-            byShell.Body.N, byShell.Body.Rms, smoothed is null ? double.NaN : byShellSmoothed.Body.Rms,
-            byShell.Surface.N, byShell.Surface.Rms);
+            shellBody.N, shellBody.Rms, smoothed is null ? double.NaN : shellBodySmoothed.Rms,
+            outerShells.N, outerShells.Rms);
     }
 
     /// <summary>
@@ -276,23 +276,34 @@ public static class QualityChecker
     private static bool[]? OuterShells(PointSet points, double[] radius)
     {
         var layer = points.Layer;
-        var lo = new Dictionary<int, double>();
-        var hi = new Dictionary<int, double>();
+        int top = -1;
+        foreach (int l in layer)
+        {
+            if (l < 0) return null;
+            top = Math.Max(top, l);
+        }
+        var lo = new double[top + 1];
+        var hi = new double[top + 1];
+        Array.Fill(lo, double.PositiveInfinity);
         for (int i = 0; i < radius.Length; i++)
         {
-            int l = layer[i];
-            if (l < 0) return null;
-            double r = radius[i];
-            lo[l] = lo.TryGetValue(l, out double a) ? Math.Min(a, r) : r;
-            hi[l] = hi.TryGetValue(l, out double b) ? Math.Max(b, r) : r;
+            lo[layer[i]] = Math.Min(lo[layer[i]], radius[i]);
+            hi[layer[i]] = Math.Max(hi[layer[i]], radius[i]);
         }
-        if (lo.Count < 3) return null;
-        foreach (var (l, r) in hi)
-            if (r - lo[l] > 1e-9 * r) return null;
+        // Used layers (an unused index keeps lo = +∞); each must be one radius.
+        var used = new List<int>();
+        for (int l = 0; l <= top; l++)
+        {
+            if (double.IsPositiveInfinity(lo[l])) continue;
+            if (hi[l] - lo[l] > 1e-9 * hi[l]) return null;
+            used.Add(l);
+        }
+        if (used.Count < 3) return null;
         // The two layers of largest radius (ties between layers cannot occur on distinct shells; ordered by index then).
-        var outer = hi.OrderByDescending(kv => kv.Value).ThenByDescending(kv => kv.Key).Take(2).Select(kv => kv.Key).ToHashSet();
+        used.Sort((p, q) => hi[q] != hi[p] ? hi[q].CompareTo(hi[p]) : q.CompareTo(p));
+        int first = used[0], second = used[1];
         var mask = new bool[radius.Length];
-        for (int i = 0; i < mask.Length; i++) mask[i] = outer.Contains(layer[i]);
+        for (int i = 0; i < mask.Length; i++) mask[i] = layer[i] == first || layer[i] == second;
         return mask;
     }
 

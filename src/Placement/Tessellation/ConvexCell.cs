@@ -416,34 +416,34 @@ internal sealed class ConvexCell
     private bool VertexOnPlanes(int a, int b, double cx, double cy, double cz, double dc)
     {
         double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], da = _d[a], db = _d[b];
-        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
-        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
-        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
-        double inv = 1.0 / (ax * bcx + ay * bcy + az * bcz);
-        double vx = (da * bcx + db * cax + dc * abx) * inv, vy = (da * bcy + db * cay + dc * aby) * inv, vz = (da * bcz + db * caz + dc * abz) * inv;
+        Meet(ax, ay, az, da, bx, by, bz, db, cx, cy, cz, dc, out double vx, out double vy, out double vz);
         double e2 = VertexResidual * VertexResidual, base2 = e2 * (vx * vx + vy * vy + vz * vz) + Tolerance * Tolerance;
         double ra = ax * vx + ay * vy + az * vz - da, rb = bx * vx + by * vy + bz * vz - db, rc = cx * vx + cy * vy + cz * vz - dc;
         return ra * ra <= 3 * (_n2[a] * base2 + e2 * da * da)
             && rb * rb <= 3 * (_n2[b] * base2 + e2 * db * db)
-            && rc * rc <= 3 * (cx * cx + cy * cy + cz * cz) * base2 + 3 * e2 * dc * dc;
+            && rc * rc <= 3 * ((cx * cx + cy * cy + cz * cz) * base2 + e2 * dc * dc);
+    }
+
+    // The point where planes n_a·x = d_a, n_b·x = d_b and n_c·x = d_c meet:
+    // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Meet(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
+        double cx, double cy, double cz, double dc, out double vx, out double vy, out double vz)
+    {
+        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
+        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
+        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
+        double inv = 1.0 / (ax * bcx + ay * bcy + az * bcz);
+        vx = (da * bcx + db * cax + dc * abx) * inv;
+        vy = (da * bcy + db * cay + dc * aby) * inv;
+        vz = (da * bcz + db * caz + dc * abz) * inv;
     }
 
     // Sets the vertex of triangle t, where planes a, b and c meet, and returns its squared distance from the generator.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private double SetVertex(int t, int a, int b, int c)
     {
-        // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)).
-        var pnx = _nx; var pny = _ny; var pnz = _nz; var pd = _d;
-        double ax = pnx[a], ay = pny[a], az = pnz[a], bx = pnx[b], by = pny[b], bz = pnz[b], cx = pnx[c], cy = pny[c], cz = pnz[c];
-        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
-        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
-        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
-        double det = ax * bcx + ay * bcy + az * bcz;
-        double da = pd[a], db = pd[b], dc = pd[c];
-        double inv = 1.0 / det;
-        double vx = (da * bcx + db * cax + dc * abx) * inv;
-        double vy = (da * bcy + db * cay + dc * aby) * inv;
-        double vz = (da * bcz + db * caz + dc * abz) * inv;
+        Meet(_nx[a], _ny[a], _nz[a], _d[a], _nx[b], _ny[b], _nz[b], _d[b], _nx[c], _ny[c], _nz[c], _d[c], out double vx, out double vy, out double vz);
         double r2 = vx * vx + vy * vy + vz * vz;
         _vx[t] = vx; _vy[t] = vy; _vz[t] = vz; _vr2[t] = r2;
         return r2;
