@@ -132,30 +132,73 @@ internal sealed class CellBuilder
         }
         var buffer = _buffer;
         bool preclipped = false, wentFar = false;
+        // The tree this cell gathers from (its slot in it: treeSlot): the tree path's own, or on the grid the far tree once
+        // the grid proved too coarse here; null while the cell gathers from the grid.
+        KdTree? cellTree = _tree;
+        int treeSlot = slot;
+        if (g is not null && _farTree is not null && OwnGridCellCount(g, gx, gy, gz) > CrowdedGridCell)
+            outer = SwitchToFarTree(self, gx, gy, gz, out cellTree, out treeSlot);
         double first = outer;
+        // Candidates the grid shells of this cell returned: until there are a cell's worth (FirstNeighbours), the cell may
+        // still span much of the domain, so vertex balls would not narrow a far gather.
+        int fromGrid = 0;
         while (true)
         {
             double outer2 = outer * outer;
             buffer.Clear();
-            // Later shells from a tree (the tree path, or the far tree of a grid cell that reaches far): only where a point
-            // can still cut the cell, inside a ball centred at a vertex through the generator (slightly enlarged against
-            // rounding).
-            var tree = inner2 == 0 ? null : _tree ?? (outer > FarShellFactor * first ? _farTree?.Value.Tree : null);
-            var index = tree is null ? _index : tree.SortedIndex;
+            KdTree? tree = null;
+            if (inner2 > 0)
+            {
+                // Later shells from a tree (the tree path, a grid cell handed to the far tree, or the far tree of a grid cell
+                // that reaches far): only where a point can still cut the cell, inside a ball centred at a vertex through
+                // the generator (slightly enlarged against rounding).
+                tree = cellTree;
+                if (tree is null && _farTree is not null && outer > FarShellFactor * first)
+                {
+                    if (fromGrid < FirstNeighbours)
+                    {
+                        // Too few neighbours to bound the cell (a sparse region next to a dense one, entered with the
+                        // dense side's small radius): start over from the far tree and the local spacing.
+                        outer = first = SwitchToFarTree(self, gx, gy, gz, out cellTree, out treeSlot);
+                        inner2 = 0;
+                        continue;
+                    }
+                    tree = _farTree.Value.Tree;
+                }
+            }
             if (tree is null)
             {
-                if (g is not null) g.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
-                else _tree!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+                if (cellTree is not null) cellTree.CollectInShell(gx, gy, gz, inner2, outer2, treeSlot, buffer);
+                else
+                {
+                    g!.CollectInShell(gx, gy, gz, inner2, outer2, slot, buffer);
+                    if (buffer.Count > CrowdedShell && _farTree is not null)
+                    {
+                        // Far more candidates than a cell has neighbours: the density changes steeply on the grid's scale
+                        // (next to a cusp or a dense core), and near-first order would test most of them. Gather this
+                        // shell again from the far tree (from the local spacing if the cell is not yet bounded).
+                        double start = SwitchToFarTree(self, gx, gy, gz, out cellTree, out treeSlot);
+                        if (fromGrid < FirstNeighbours)
+                        {
+                            inner2 = 0;
+                            outer = first = start;
+                        }
+                        continue;
+                    }
+                    fromGrid += buffer.Count;
+                }
             }
             else
             {
                 var vr2 = cell.VertexRadiusSquared;
                 if (_ballR2.Length < vr2.Length) _ballR2 = new double[Math.Max(vr2.Length, 2 * _ballR2.Length)];
                 for (int k = 0; k < vr2.Length; k++) _ballR2[k] = vr2[k] * (1 + 1e-6);
-                int exclude = tree == _tree ? slot : _farTree!.Value.SlotOf[self];
-                wentFar |= tree != _tree;
+                int exclude = tree == cellTree ? treeSlot : _farTree!.Value.SlotOf[self];
+                wentFar |= tree != cellTree;
                 tree.CollectInShellNearBalls(gx, gy, gz, inner2, outer2, exclude, buffer, cell.Vx, cell.Vy, cell.Vz, _ballR2.AsSpan(0, vr2.Length));
             }
+            var gathered = tree ?? cellTree;
+            var index = gathered is null ? _index : gathered.SortedIndex;
             var order = tree is not null ? DeepestCutFirstOrder(buffer, cell) : NearFirstOrder(buffer, inner2, outer2);
             var dist2 = buffer.DistanceSquared; var slotOf = buffer.Slot; var bx = buffer.Dx; var by = buffer.Dy; var bz = buffer.Dz;
             for (int k = 0; k < order.Length; k++)
@@ -180,12 +223,41 @@ internal sealed class CellBuilder
             // is limited to where points can still cut, so it reaches the security radius at once; the grid's isotropic
             // shells at most double per round.
             double reach = Math.Sqrt(security2) * (1 + 1e-9);
-            outer = tree is not null || (_farTree is not null && 2.0 * outer > FarShellFactor * first) ? reach : Math.Min(reach, 2.0 * outer);
+            bool farNext = cellTree is null && _farTree is not null && fromGrid >= FirstNeighbours && 2.0 * outer > FarShellFactor * first;
+            outer = tree is not null || farNext ? reach : Math.Min(reach, 2.0 * outer);
         }
         // The next cell starts from this one's security radius (neighbours in space, so of similar size), at most
         // FarShellFactor times this one's start, and not at all from a cell that reached far: its radius would sweep the
         // dense region around the next cell.
         if (!wentFar) _lastSecurity = Math.Min(2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
+    }
+
+    // A grid cell holding more than this many points (the grid sizes cells for about 1.5) marks a region far denser than
+    // the grid resolves (a cusp or a dense core): its cells gather from the far tree.
+    private const int CrowdedGridCell = 24;
+
+    // Candidates in one grid shell beyond which the cell gathers from the far tree instead (about 50 in a first shell
+    // of points of even density).
+    private const int CrowdedShell = 400;
+
+    private static int OwnGridCellCount(PointGrid g, double x, double y, double z)
+    {
+        int c = g.CellOf(x, y, z);
+        return g.CellStart[c + 1] - g.CellStart[c];
+    }
+
+    private KdTreeSearch? _farSearch;
+
+    // Hands a grid cell over to the far tree: its slot there and, as on the tree path, the first shell radius from the
+    // local spacing (1.5 × the distance to the FirstNeighbours-th nearest point).
+    private double SwitchToFarTree(int self, double gx, double gy, double gz, out KdTree tree, out int treeSlot)
+    {
+        var far = _farTree!.Value;
+        tree = far.Tree;
+        treeSlot = far.SlotOf[self];
+        _farSearch ??= tree.CreateSearch();
+        int found = _farSearch.Nearest(gx, gy, gz, treeSlot, _nearSlots, _nearD2);
+        return found > 0 ? 1.5 * Math.Sqrt(_nearD2[found - 1]) : _firstRadius;
     }
 
     // Relative excess radius of the coarse tangent-plane pre-clip.
