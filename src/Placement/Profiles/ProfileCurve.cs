@@ -29,6 +29,13 @@ internal sealed class ProfileCurve
 
     public double OuterRadius => R1[^1];
 
+    /// <summary>
+    /// Log slope |d ln ρ/d ln r| at the first row (off centre) below which the density is continued as a smooth core rather
+    /// than a power-law cusp: 0.1, so cusps ρ ∝ r^−γ with γ ≥ 0.1 stay cusps and a core's extrapolated ρ(0) exceeds the
+    /// first row's by at most 5 %.
+    /// </summary>
+    public const double CoreSlopeLimit = 0.1;
+
     /// <summary>Builds the interpolant. Nodes must already be validated (see <see cref="ProfileTableChecks"/>).</summary>
     /// <param name="r">Node radii, non-decreasing, a repeated radius marking a step.</param>
     /// <param name="v">Node values.</param>
@@ -84,7 +91,17 @@ internal sealed class ProfileCurve
             first = false;
             start = end + 1;
         }
-        if (r[0] > 0) seg.Insert(0, (0, r[0], CorePower, v[0], v[0], density ? coreSlope : 0, 0));
+        if (r[0] > 0)
+        {
+            // Below the first row: a density whose log slope there is shallower than CoreSlopeLimit is a smooth core sampled
+            // off centre (a stellar model's first zone; the slope of ρ_c − a r² vanishes like r²), continued as the even
+            // centre form with ρ(0) = ρ0 (1 − s/q), which matches ρ0 and the slope s at the first row; a steeper one is a cusp
+            // (Hernquist, NFW: s → −1) continued as the power law ρ0 (r/r0)^s, whose ρ(0) is infinite.
+            if (density && coreSlope > -CoreSlopeLimit)
+                seg.Insert(0, (0, r[0], Centre, v[0] * (1 - coreSlope / centreExponent), v[0], centreExponent, 0));
+            else
+                seg.Insert(0, (0, r[0], CorePower, v[0], v[0], density ? coreSlope : 0, 0));
+        }
 
         var c = new ProfileCurve();
         int s = seg.Count;

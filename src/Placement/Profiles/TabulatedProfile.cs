@@ -13,8 +13,9 @@ namespace Placement.Profiles;
 /// 1980) of ln ρ against ln r, so it never overshoots the rows and follows power laws and steep envelopes over many
 /// decades exactly where they are power laws. Special segments: <i>centre</i>, when the table starts at r = 0:
 /// ρ = ρ0 + (ρ1 − ρ0)(r/r1)², even in r as a smooth spherical density must be; <i>core extrapolation</i>, when the
-/// table starts at r0 &gt; 0: the power law ρ0 (r/r0)^s continuing the first segment's log slope, clamped to
-/// −2.5 ≤ s ≤ 0 (a cusp such as Hernquist's ρ ∝ 1/r is continued, a flat core stays flat, the mass stays finite);
+/// table starts at r0 &gt; 0, from the first segment's log slope s at r0 (clamped to −2.5 ≤ s ≤ 0, so the mass stays
+/// finite): a cusp (s ≤ −0.1, e.g. Hernquist's ρ ∝ 1/r) continues as the power law ρ0 (r/r0)^s, a core (a shallower
+/// slope, as at a stellar model's first zone) as the centre form above with ρ(0) = ρ0 (1 − s/2), matching ρ0 and s at r0;
 /// <i>surface</i>, when the last row has ρ = 0: ρ = ρ_a ((R − r)/(R − r_a))^p with p fitted to the two rows before
 /// the surface (clamped to [0.25, 10]; exact for polytrope-like surfaces ρ ∝ (R − r)^p).</para>
 /// <para><b>Steps.</b> A radius repeated on two consecutive rows with different densities is a density step (e.g. a

@@ -47,6 +47,26 @@ public class TabulatedProfileTests
     }
 
     [Fact]
+    public void FlatCoreSampledOffCentre_KeepsAFiniteCentralDensity()
+    {
+        // Plummer sphere (Plummer 1911, MNRAS 71, 460): ρ = ρ_c (1 + r²/a²)^(−5/2), M(<r) = M r³/(r² + a²)^(3/2), with
+        // ρ_c = 3M/(4πa³); M = a = 1. Rows start off centre at r0 = 0.01, as a stellar model's first zone does. Its log
+        // slope there (−5e-4) marks a core: ρ(0) must be finite and near ρ_c (it was +∞ while every first slope
+        // continued as a power law), and the mass inside r0 still follows the analytic M(r).
+        double[] r = Geometric(0.01, 10, 200);
+        double rhoC = 3 / (4 * Math.PI);
+        var rho = r.Select(x => rhoC * Math.Pow(1 + x * x, -2.5)).ToArray();
+        var p = new TabulatedProfile(r, rho, UnitSystem.Dimensionless);
+        p.CheckValidity();
+        Assert.True(Math.Abs(p.Density(0) / rhoC - 1) < 1e-4, $"ρ(0) = {p.Density(0)} against ρ_c = {rhoC}");
+        foreach (double x in new[] { 0.002, 0.005, 0.01, 0.05 })
+        {
+            double exact = x * x * x / Math.Pow(x * x + 1, 1.5);
+            Assert.True(Math.Abs(p.EnclosedMass(x) / exact - 1) < 1e-4, $"M at {x}: {p.EnclosedMass(x)} against {exact}");
+        }
+    }
+
+    [Fact]
     public void SteepEnvelope_OverTwelveDecades_MassAccurate_InverseRoundTripsTo1e13()
     {
         // Gaussian ρ = 100 exp(−r²/(2σ²)), σ = 0.14: density falls from 1e2 to 8e-10 at r = 1 (11 decades), with a
