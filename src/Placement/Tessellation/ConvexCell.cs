@@ -18,9 +18,12 @@ namespace Placement.Tessellation;
 /// <para>Robustness: a vertex is removed only if it lies beyond the plane by more than <c>Tolerance</c> (a length,
 /// relative to the cell size), so planes through existing vertices (co-spherical neighbours, lattices) leave the
 /// cell unchanged and add no face. If rounding ever makes the removed patch not a disc, the clip is retried with
-/// tolerances 64× larger each time, from the fifth try relative to the cell's farthest vertex (1e-10 R_max and up) rather
-/// than to the neighbour spacing; if all eight fail, the cell is rebuilt from its box with the failing plane first (see
-/// <c>Restart</c>), and only if that fails too an exception names the generator.</para>
+/// tolerances 64× larger each time, from the fifth try relative to the cell's farthest vertex (1e-10 R_max and up, never
+/// beyond 1e-6 R_max) rather than to the neighbour spacing; if all tries fail, the cell is rebuilt from its box with the
+/// failing plane first (see <c>Restart</c>; at most 16 rebuilds per cell), and only if that fails too an exception names
+/// the generator. A new vertex must lie on its three planes and within the cell's farthest vertex (it lies on an edge of
+/// the cell being cut); where the three planes are nearly dependent (relative determinant below 1e-6: the bisectors of a
+/// ring of shell points, or of a compact cluster seen from far away) it is computed in double-double arithmetic.</para>
 /// <para>Memory: capacity grows on demand; a typical cell (16 planes, 28 vertices) touches about 3 KB, held once per
 /// thread. Coordinates are relative to the generator, which keeps rounding relative to the cell size.</para>
 /// </remarks>
@@ -42,6 +45,9 @@ internal sealed class ConvexCell
 
     // First of the cell-extent-relative tolerances (see Clip), as a fraction of the farthest vertex distance.
     private const double FarTolerance = 1e-10;
+
+    // Largest clip tolerance, as a fraction of the farthest vertex distance.
+    private const double MaxTolerance = 1e-6;
 
     public int PlaneCount => _planeCount;
 
@@ -72,6 +78,7 @@ internal sealed class ConvexCell
     /// </summary>
     public void InitBox(double lox, double loy, double loz, double hix, double hiy, double hiz, ReadOnlySpan<int> codes)
     {
+        if (_restarts == 0) _restartsUsed = 0;
         _box[0] = lox; _box[1] = loy; _box[2] = loz; _box[3] = hix; _box[4] = hiy; _box[5] = hiz;
         codes[..6].CopyTo(_boxCodes);
         _planeCount = 0;
@@ -126,12 +133,16 @@ internal sealed class ConvexCell
             if (r == 0) return false;
             if (r == _triCount)
                 throw new InvalidOperationException("A clipping plane removed the whole cell; the generator lies outside its own half-space.");
-            if (TryRebuild(nx, ny, nz, d, neighbour)) return true;
+            if (TryRebuild(nx, ny, nz, d, neighbour, eps / norm)) return true;
             // After four tries relative to the neighbour spacing, tolerances relative to the cell's own extent: a vertex
             // where several nearly dependent planes meet (the bisectors of points on one sphere all pass through its
             // centre, so an unfinished cell of a shell point has a many-plane apex there) is rounded by about
             // 1e-16 R_max / det, far beyond the spacing-relative tolerance when the cell still reaches the domain box.
-            eps = attempt == 3 ? Math.Max(eps * 64, FarTolerance * Math.Sqrt(MaxRadiusSquared) * norm) : eps * 64;
+            // Never beyond MaxTolerance of the cell's extent: a tolerance near the cut's own depth would keep every vertex
+            // and report no cut where the plane does cut.
+            double cap = MaxTolerance * Math.Sqrt(MaxRadiusSquared) * norm;
+            if (eps >= cap) break;
+            eps = Math.Min(cap, attempt == 3 ? Math.Max(eps * 64, FarTolerance * Math.Sqrt(MaxRadiusSquared) * norm) : eps * 64);
         }
         return Restart(nx, ny, nz, d, neighbour);
     }
@@ -144,6 +155,11 @@ internal sealed class ConvexCell
     // Restarts allowed per cell (nested: a replay that fails restarts again with that plane first as well).
     private const int MaxRestarts = 8;
 
+    // Restarts allowed per cell in all (each replays every stored plane; a cell that keeps failing would otherwise take
+    // time exponential in the nesting), and how many this cell used (reset by InitBox outside a restart).
+    private const int MaxRestartsPerCell = 16;
+    private int _restartsUsed;
+
     /// <summary>
     /// Last resort when a clip stays inconsistent: the cell is the intersection of the box and every plane stored so far
     /// (a plane that did not cut never can later), whatever the order, so it is rebuilt from the box with the failing
@@ -154,7 +170,7 @@ internal sealed class ConvexCell
     /// </summary>
     private bool Restart(double nx, double ny, double nz, double d, int neighbour)
     {
-        if (_restarts >= MaxRestarts)
+        if (_restarts >= MaxRestarts || _restartsUsed >= MaxRestartsPerCell)
             throw new InvalidOperationException("Voronoi cell clipping stayed inconsistent after enlarging the tolerance and reordering the planes (degenerate input beyond double precision).");
         int stored = _planeCount - 6;
         // A snapshot per restart (rare), so a nested restart cannot overwrite the planes this one still replays.
@@ -166,6 +182,7 @@ internal sealed class ConvexCell
             neighbours[p] = _neighbour[p + 6];
         }
         _restarts++;
+        _restartsUsed++;
         try
         {
             InitBox(_box[0], _box[1], _box[2], _box[3], _box[4], _box[5], _boxCodes);
@@ -251,7 +268,20 @@ internal sealed class ConvexCell
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool IsRemoved(int t) => (_removed[t >> 6] & (1UL << (t & 63))) != 0;
 
-    private bool TryRebuild(double nx, double ny, double nz, double d, int neighbour)
+    // The new vertices of a clip, in cycle order, computed once while the cycle is checked.
+    private double[] _newX = new double[64], _newY = new double[64], _newZ = new double[64], _newR2 = new double[64];
+
+    // How far, in units of the clip's tolerance, a new vertex may lie beyond the cell's farthest vertex (a kept vertex
+    // may lie that far beyond the plane, so the edge it ends may be cut just past its end).
+    private const double OvershootTolerances = 64;
+
+    private void GrowNewVertices(int min)
+    {
+        int n = Math.Max(min, 2 * _newX.Length);
+        _newX = new double[n]; _newY = new double[n]; _newZ = new double[n]; _newR2 = new double[n];
+    }
+
+    private bool TryRebuild(double nx, double ny, double nz, double d, int neighbour, double slack)
     {
         if (_next.Length < _planeCount + 1) GrowScratchPlanes(_planeCount + 1);
         int stamp = ++_stamp;
@@ -263,15 +293,30 @@ internal sealed class ConvexCell
         // they may not: a zero determinant makes the vertex NaN, and nearly dependent planes (the bisectors of points on
         // one circle — a ring of a shell — all contain its axis, so three of them share a line) give a finite point far
         // off its planes that would silently cut the cell short. Such a clip is refused like a broken cycle and retried.
+        // Every new vertex also lies on an edge of the cell being cut, so within its farthest vertex: one beyond it (by more
+        // than the clip's tolerance allows a kept vertex to overshoot) comes from an edge nearly parallel to the new plane
+        // whose end counted as kept within tolerance — the bisectors of a compact cluster seen from far away are nearly
+        // parallel — and would make the cell non-convex. Refused like a broken cycle.
         double n2 = nx * nx + ny * ny + nz * nz;
+        double reach = Math.Sqrt(MaxRadiusSquared) * (1 + 1e-9) + OvershootTolerances * slack, reach2 = reach * reach;
+        if (_newX.Length < boundary) GrowNewVertices(boundary);
         int steps = 0, x = first;
         do
         {
-            if (_nextStamp[x] != stamp) return false;
+            if (_nextStamp[x] != stamp || steps == boundary) return false;
             int y = _next[x];
-            double det = TripleProduct(x, y, nx, ny, nz);
+            double det = Meet(_nx[x], _ny[x], _nz[x], _d[x], _nx[y], _ny[y], _nz[y], _d[y], nx, ny, nz, d, out double vx, out double vy, out double vz);
             if (!double.IsFinite(1.0 / det)) return false;
-            if (det * det < IllConditioned * _n2[x] * _n2[y] * n2 && !VertexOnPlanes(x, y, nx, ny, nz, d)) return false;
+            if (det * det < IllConditioned * _n2[x] * _n2[y] * n2)
+            {
+                // Nearly dependent planes: Cramer's rule in double-double arithmetic, so the vertex is accurate to rounding
+                // for any determinant the doubles can resolve (in double it is off by about 1e-16 |v| / relative det).
+                MeetExtended(_nx[x], _ny[x], _nz[x], _d[x], _nx[y], _ny[y], _nz[y], _d[y], nx, ny, nz, d, out vx, out vy, out vz);
+                if (!VertexOnPlanes(x, y, nx, ny, nz, d, vx, vy, vz)) return false;
+            }
+            double q2 = vx * vx + vy * vy + vz * vz;
+            if (!(q2 <= reach2)) return false;
+            _newX[steps] = vx; _newY[steps] = vy; _newZ[steps] = vz; _newR2[steps] = q2;
             x = y;
             steps++;
         } while (x != first && steps <= boundary);
@@ -296,7 +341,8 @@ internal sealed class ConvexCell
                 t = _triCount++;
             }
             _ta[t] = x; _tb[t] = y; _tc[t] = p;
-            newMax = Math.Max(newMax, SetVertex(t, x, y, p));
+            _vx[t] = _newX[k]; _vy[t] = _newY[k]; _vz[t] = _newZ[k]; _vr2[t] = _newR2[k];
+            newMax = Math.Max(newMax, _newR2[k]);
             x = y;
         }
         // Remaining removed slots (the patch had interior vertices): compact, keeping order.
@@ -394,14 +440,6 @@ internal sealed class ConvexCell
         _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
     }
 
-    // n_a · (n_b × n) for stored planes a, b and a new normal n.
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private double TripleProduct(int a, int b, double nx, double ny, double nz)
-    {
-        double bcx = _ny[b] * nz - _nz[b] * ny, bcy = _nz[b] * nx - _nx[b] * nz, bcz = _nx[b] * ny - _ny[b] * nx;
-        return _nx[a] * bcx + _ny[a] * bcy + _nz[a] * bcz;
-    }
-
     // Squared relative determinant |n_a·(n_b × n_c)|² / (|n_a|²|n_b|²|n_c|²) below which a new vertex is checked against
     // its planes: above it rounding moves the vertex by at most ~1e-10 of the lengths involved.
     private const double IllConditioned = 1e-12;
@@ -410,13 +448,11 @@ internal sealed class ConvexCell
     // lengths involved.
     private const double VertexResidual = 1e-9;
 
-    // Whether the point where stored planes a, b and the new plane (n, d) meet, as SetVertex computes it, lies on all
-    // three: residuals n·v − d within VertexResidual (|v| + |d|/|n|) + Tolerance as lengths (squared, with
+    // Whether the point v computed for stored planes a, b and the new plane (n, d) lies on all three: residuals n·v − d within VertexResidual (|v| + |d|/|n|) + Tolerance as lengths (squared, with
     // (x + y + z)² ≤ 3(x² + y² + z²), so no root is taken).
-    private bool VertexOnPlanes(int a, int b, double cx, double cy, double cz, double dc)
+    private bool VertexOnPlanes(int a, int b, double cx, double cy, double cz, double dc, double vx, double vy, double vz)
     {
         double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], da = _d[a], db = _d[b];
-        Meet(ax, ay, az, da, bx, by, bz, db, cx, cy, cz, dc, out double vx, out double vy, out double vz);
         double e2 = VertexResidual * VertexResidual, base2 = e2 * (vx * vx + vy * vy + vz * vz) + Tolerance * Tolerance;
         double ra = ax * vx + ay * vy + az * vz - da, rb = bx * vx + by * vy + bz * vz - db, rc = cx * vx + cy * vy + cz * vz - dc;
         return ra * ra <= 3 * (_n2[a] * base2 + e2 * da * da)
@@ -425,28 +461,73 @@ internal sealed class ConvexCell
     }
 
     // The point where planes n_a·x = d_a, n_b·x = d_b and n_c·x = d_c meet:
-    // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)).
+    // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)). Returns the determinant
+    // n_a · (n_b × n_c); the vertex is not finite when it is zero.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Meet(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
+    private static double Meet(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
         double cx, double cy, double cz, double dc, out double vx, out double vy, out double vz)
     {
         double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
         double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
         double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
-        double inv = 1.0 / (ax * bcx + ay * bcy + az * bcz);
+        double det = ax * bcx + ay * bcy + az * bcz, inv = 1.0 / det;
         vx = (da * bcx + db * cax + dc * abx) * inv;
         vy = (da * bcy + db * cay + dc * aby) * inv;
         vz = (da * bcz + db * caz + dc * abz) * inv;
+        return det;
     }
 
-    // Sets the vertex of triangle t, where planes a, b and c meet, and returns its squared distance from the generator.
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private double SetVertex(int t, int a, int b, int c)
+    // Meet in double-double arithmetic (each value an unevaluated sum hi + lo; products split exactly with a fused
+    // multiply-add, sums with Knuth's two-sum): the cross products and the determinant carry about 106 bits, and each
+    // coordinate is rounded to double once at the end.
+    private static void MeetExtended(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
+        double cx, double cy, double cz, double dc, out double vx, out double vy, out double vz)
     {
-        Meet(_nx[a], _ny[a], _nz[a], _d[a], _nx[b], _ny[b], _nz[b], _d[b], _nx[c], _ny[c], _nz[c], _d[c], out double vx, out double vy, out double vz);
-        double r2 = vx * vx + vy * vy + vz * vz;
-        _vx[t] = vx; _vy[t] = vy; _vz[t] = vz; _vr2[t] = r2;
-        return r2;
+        var bcx = Diff(by, cz, bz, cy); var bcy = Diff(bz, cx, bx, cz); var bcz = Diff(bx, cy, by, cx);
+        var cax = Diff(cy, az, cz, ay); var cay = Diff(cz, ax, cx, az); var caz = Diff(cx, ay, cy, ax);
+        var abx = Diff(ay, bz, az, by); var aby = Diff(az, bx, ax, bz); var abz = Diff(ax, by, ay, bx);
+        var det = Add(Add(Scale(ax, bcx), Scale(ay, bcy)), Scale(az, bcz));
+        vx = Divide(Add(Add(Scale(da, bcx), Scale(db, cax)), Scale(dc, abx)), det);
+        vy = Divide(Add(Add(Scale(da, bcy), Scale(db, cay)), Scale(dc, aby)), det);
+        vz = Divide(Add(Add(Scale(da, bcz), Scale(db, caz)), Scale(dc, abz)), det);
+    }
+
+    // p q − r s exactly enough: both products split into hi + lo.
+    private static (double Hi, double Lo) Diff(double p, double q, double r, double s)
+    {
+        double a = p * q, ae = Math.FusedMultiplyAdd(p, q, -a);
+        double b = r * s, be = Math.FusedMultiplyAdd(r, s, -b);
+        return Add((a, ae), (-b, -be));
+    }
+
+    private static (double Hi, double Lo) TwoSum(double a, double b)
+    {
+        double s = a + b, bb = s - a;
+        return (s, (a - (s - bb)) + (b - bb));
+    }
+
+    private static (double Hi, double Lo) Add((double Hi, double Lo) x, (double Hi, double Lo) y)
+    {
+        var (s, e) = TwoSum(x.Hi, y.Hi);
+        var (t, f) = TwoSum(x.Lo, y.Lo);
+        e += t;
+        (s, e) = TwoSum(s, e);
+        e += f;
+        return TwoSum(s, e);
+    }
+
+    private static (double Hi, double Lo) Scale(double a, (double Hi, double Lo) x)
+    {
+        double p = a * x.Hi, pe = Math.FusedMultiplyAdd(a, x.Hi, -p);
+        return TwoSum(p, pe + a * x.Lo);
+    }
+
+    // x / y rounded to double: one correction step on the double quotient.
+    private static double Divide((double Hi, double Lo) x, (double Hi, double Lo) y)
+    {
+        double q = x.Hi / y.Hi;
+        var r = Add(x, Scale(-q, y));
+        return q + (r.Hi + r.Lo) / y.Hi;
     }
 
     // Face rings: for plane p, the triangles around its face in order, Ring[RingStart[p] .. RingStart[p+1]).

@@ -148,6 +148,37 @@ public class NeighbourIndexTests
     }
 
     [Fact]
+    public void SparsePointsAroundACompactCluster_GiveExactCells()
+    {
+        // An invented compact core seen from far away, as a giant's envelope points see a dense core: 4000 points in a
+        // ball of radius 1e-4, 400 points with log-uniform radii in [0.01, 1). The bisectors between an envelope point and
+        // the core's points are nearly parallel (1e-4 rad apart), so three of them meet at determinants near 1e-9 of their
+        // scale, where Cramer's rule in double misplaces the vertex by ~1e-7 of the cell and the clip turns inconsistent.
+        // Such a set used to stall in ever larger tolerances and restarts (a 2e4-point Poisson set of an invented giant
+        // never finished); vertices of nearly dependent planes are now computed in double-double arithmetic.
+        const int core = 4000, envelope = 400, n = core + envelope;
+        var x = new double[n]; var y = new double[n]; var z = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            var rng = new KeyedRandom(77, (ulong)i);
+            double r = i < core ? 1e-4 * Math.Cbrt(rng.NextDouble()) : Math.Pow(10, -2 + 2 * rng.NextDouble());
+            double c = 2 * rng.NextDouble() - 1, phi = 2 * Math.PI * rng.NextDouble(), w = Math.Sqrt(1 - c * c);
+            x[i] = r * w * Math.Cos(phi); y[i] = r * w * Math.Sin(phi); z[i] = r * c;
+        }
+        var box = VoronoiTessellation.Compute(x, y, z, TessellationDomain.Box(-1, -1, -1, 1, 1, 1));
+        // The box is tiled exactly: volumes sum to 8 within 1e-12 (common practice for double-precision cells).
+        box.CheckValidity(x, y, z, 1e-12);
+        var domain = TessellationDomain.Sphere(0, 0, 0, 1);
+        var grid = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions { NeighbourIndex = NeighbourIndexKind.UniformGrid });
+        var tree = VoronoiTessellation.Compute(x, y, z, domain, new TessellationOptions { NeighbourIndex = NeighbourIndexKind.KdTree });
+        for (int i = 0; i < n; i++)
+        {
+            if (grid.CutByDomain[i] || tree.CutByDomain[i]) continue;
+            Assert.True(Math.Abs(tree.Volume[i] / grid.Volume[i] - 1) < 1e-10, $"cell {i}: {tree.Volume[i]:R} vs {grid.Volume[i]:R}");
+        }
+    }
+
+    [Fact]
     public void KdTreeResults_AreIdenticalOnOneAndTwoThreads()
     {
         var (x, y, z) = Cusp(12000, 9, 20);
