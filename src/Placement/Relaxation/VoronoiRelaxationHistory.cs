@@ -16,4 +16,15 @@ public sealed record VoronoiRelaxationHistory(double[] LogRatioStd, double[] Int
 {
     /// <summary>Number of iterations done (one tessellation each; undone steps included).</summary>
     public int Iterations => Math.Max(0, LogRatioStd.Length - 1);
+
+    /// <summary>Index of the entry that describes the result: the last one whose step was kept (−1 when empty).</summary>
+    public int ResultIndex
+    {
+        get
+        {
+            int k = LogRatioStd.Length - 1;
+            while (k > 0 && Undone[k]) k--;
+            return k;
+        }
+    }
 }

@@ -248,4 +248,16 @@ public class VoronoiRelaxedSamplerTests
         Assert.Equal(plan.History.LogRatioStd.Length, plan.Notes[1].Split(' ').Count(t => t.Length > 0 && char.IsDigit(t[0]) && t.Contains('/', StringComparison.Ordinal)));
         Assert.Equal("voronoi-relaxed", result.Points.Provenance.Sampler);
     }
+
+    [Fact]
+    public void History_ResultIsTheLastKeptState()
+    {
+        // An undone step sends the set back; the result is the last state whose step was kept, not the undone one
+        // (the sampler's note used to quote the undone state's scatter as the result).
+        var history = new VoronoiRelaxationHistory([9.0, 8.9, 9.0, 8.95], [0.022, 0.096, 0.022, 0.070], [1, 1, 1, 1],
+            [0.1, 0.1, 0.1, 0], [1, 1, 1, 1], [false, true, false, true], false);
+        Assert.Equal(2, history.ResultIndex);
+        var kept = history with { Undone = [false, false, false, false] };
+        Assert.Equal(3, kept.ResultIndex);
+    }
 }

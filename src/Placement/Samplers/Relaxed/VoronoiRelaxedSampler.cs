@@ -64,7 +64,7 @@ public sealed class VoronoiRelaxedSampler : IPointSampler
         var plan = new VoronoiRelaxedPlan(placed.X, placed.Y, placed.Z, request.Profile.TotalMass / placed.Count, history);
         bool any = history.LogRatioStd.Length > 0;
         plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
-            $"{start.Name} start relaxed on its Voronoi cells for {history.Iterations} iterations: std ln(Vρ/m) {(any ? history.LogRatioStd[0] : double.NaN):G3} → {(any ? history.LogRatioStd[^1] : double.NaN):G3} overall, {(any ? history.InteriorLogRatioStd[0] : double.NaN):G3} → {(any ? history.InteriorLogRatioStd[^1] : double.NaN):G3} in cells not cut by the surface; {(history.Converged ? "converged" : "iteration limit reached")}."));
+            $"{start.Name} start relaxed on its Voronoi cells for {history.Iterations} iterations: std ln(Vρ/m) {(any ? history.LogRatioStd[0] : double.NaN):G3} → {(any ? history.LogRatioStd[history.ResultIndex] : double.NaN):G3} overall, {(any ? history.InteriorLogRatioStd[0] : double.NaN):G3} → {(any ? history.InteriorLogRatioStd[history.ResultIndex] : double.NaN):G3} in cells not cut by the surface; {(history.Converged ? "converged" : "iteration limit reached")}."));
         // The whole convergence history as a note, so `place --json` and the console carry it for plotting.
         var steps = new System.Text.StringBuilder("history per iteration, std ln(Vρ/m) overall / cells not cut by the surface (* = step undone):");
         for (int k = 0; k < history.LogRatioStd.Length; k++)
