@@ -440,16 +440,18 @@ internal sealed class ConvexCell
         _vx[to] = _vx[from]; _vy[to] = _vy[from]; _vz[to] = _vz[from]; _vr2[to] = _vr2[from];
     }
 
-    // Squared relative determinant |n_a·(n_b × n_c)|² / (|n_a|²|n_b|²|n_c|²) below which a new vertex is checked against
-    // its planes: above it rounding moves the vertex by at most ~1e-10 of the lengths involved.
+    // Squared relative determinant |n_a·(n_b × n_c)|² / (|n_a|²|n_b|²|n_c|²) below which a new vertex is computed in
+    // double-double and checked against its planes: above it rounding in double moves the vertex by at most ~1e-10 of the
+    // lengths involved.
     private const double IllConditioned = 1e-12;
 
     // Relative residual beyond which a computed vertex counts as off its planes: a sound vertex is off by ~1e-16 of the
     // lengths involved.
     private const double VertexResidual = 1e-9;
 
-    // Whether the point v computed for stored planes a, b and the new plane (n, d) lies on all three: residuals n·v − d within VertexResidual (|v| + |d|/|n|) + Tolerance as lengths (squared, with
-    // (x + y + z)² ≤ 3(x² + y² + z²), so no root is taken).
+    // Whether the point v computed for stored planes a, b and the new plane (n, d) lies on all three: residuals n·v − d
+    // within VertexResidual (|v| + |d|/|n|) + Tolerance as lengths (squared, with (x + y + z)² ≤ 3(x² + y² + z²), so no
+    // root is taken).
     private bool VertexOnPlanes(int a, int b, double cx, double cy, double cz, double dc, double vx, double vy, double vz)
     {
         double ax = _nx[a], ay = _ny[a], az = _nz[a], bx = _nx[b], by = _ny[b], bz = _nz[b], da = _d[a], db = _d[b];
