@@ -39,8 +39,8 @@ namespace Placement.Relaxation;
 /// <see cref="RadialConstraint.RankStretch"/> <see cref="RadialRankStretch"/> moves the k-th nearest point to the radius
 /// enclosing (k + ½)/N of the mass after every step (exact to half a point whatever the step; equal masses). Cells whose
 /// ρ_target changes by more than a factor e across them (a density step runs through the cell) are left out of the
-/// residual like the cut cells: no arrangement makes V ρ(r_i) = m there. Known steps
-/// (<see cref="IRadialProfile.DensitySteps"/>) are different: a step-aware shell start ends a shell on each and mirrors
+/// residual like the cut cells: no arrangement makes V ρ(r_i) = m there. Known steps (declared ones,
+/// <see cref="IRadialProfile.DensitySteps"/>, and jumps too narrow for the points, <see cref="DensityJumps.Find"/>) are different: a step-aware shell start ends a shell on each and mirrors
 /// the points of the two flanking shells about it, so the face between the two flanking shells lies on the step and ρ_target(r_i) stands for
 /// their cells; generators within two cell radii of a known step are targeted but never moved.</para>
 /// <para>Deterministic: the tessellation, the geometry and every per-point loop run in fixed chunks that write only their
@@ -80,7 +80,11 @@ public static class VoronoiRelaxation
         var domain = TessellationDomain.Sphere(0, 0, 0, big * (1 + 1e-9) + 1e-300);
         var tessellator = new VoronoiTessellator(domain, new TessellationOptions { KeepFaces = true, Parallel = parallel });
         var geometry = new VoronoiCellGradients();
-        var w = new Workspace(n);
+        var w = new Workspace(n)
+        {
+            // The same steps a shell start ends shells on for this point mass: declared ones and jumps found in ρ.
+            Steps = [.. DensityJumps.Find(profile, points.TotalMass() / n).Select(j => j.Radius)],
+        };
         double[] x = points.X, y = points.Y, z = points.Z, mass = points.Mass;
         bool tangential = settings.Radial == RadialConstraint.KeepRadii;
         for (int i = 0; i < n; i++) w.Radius[i] = points.Radius(i);
@@ -139,9 +143,9 @@ public static class VoronoiRelaxation
 
     // True when a known density step of the profile passes within `reach` of r: the flanking shells a step-aware start
     // put on either side of the step (their shared face on the step, their points half a shell from it) stay put.
-    private static bool NextToStep(IReadOnlyList<double> steps, double r, double reach)
+    private static bool NextToStep(double[] steps, double r, double reach)
     {
-        for (int k = 0; k < steps.Count; k++)
+        for (int k = 0; k < steps.Length; k++)
             if (Math.Abs(r - steps[k]) < reach) return true;
         return false;
     }
@@ -152,7 +156,7 @@ public static class VoronoiRelaxation
         ParallelSettings? parallel, out double std, out double interiorStd, out double interiorRms, out double maxAbs)
     {
         int n = cells.Count;
-        var steps = profile.DensitySteps;
+        var steps = w.Steps;
         ParallelLoop.For(n, parallel, (s, e) =>
         {
             for (int i = s; i < e; i++)
@@ -168,7 +172,7 @@ public static class VoronoiRelaxation
                 w.InvVolume[i] = rho > 0 && !cells.CutByDomain[i] && (frozen || !Straddles(profile, r, cells.CellRadius(i))) ? 1.0 / v : 0;
             }
         });
-        w.AnyFrozen = steps.Count > 0 && Array.IndexOf(w.Frozen, true) >= 0;
+        w.AnyFrozen = steps.Length > 0 && Array.IndexOf(w.Frozen, true) >= 0;
         double sum = 0, sum2 = 0, isum = 0, isum2 = 0, max = 0;
         int count = 0, interior = 0;
         for (int i = 0; i < n; i++)
@@ -331,6 +335,7 @@ public static class VoronoiRelaxation
         public readonly double[] Lx = new double[n], Ly = new double[n], Lz = new double[n], Dx = new double[n], Dy = new double[n], Dz = new double[n];
         public readonly bool[] Frozen = new bool[n];
         public bool AnyFrozen;
+        public double[] Steps { get; init; } = [];
     }
 
     private sealed class Recorder

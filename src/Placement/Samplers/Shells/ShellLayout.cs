@@ -45,8 +45,10 @@ public sealed class ShellLayout
     private const int TailShells = 6;
 
     private ShellLayout(int count, double pointMass, int centreCount, double centreRadius, double centreOuterRadius,
-        int[] nSide, int[] firstPoint, double[] inner, double[] outer, double[] pointRadius, double[] enclosedCount)
+        int[] nSide, int[] firstPoint, double[] inner, double[] outer, double[] pointRadius, double[] enclosedCount,
+        DensityJump[] steps)
     {
+        Steps = steps;
         Count = count;
         PointMass = pointMass;
         CentreCount = centreCount;
@@ -96,6 +98,13 @@ public sealed class ShellLayout
     /// <summary>Number of points inside each shell's outer boundary, C_k (as a double for mass products).</summary>
     public IReadOnlyList<double> EnclosedCount { get; }
 
+    /// <summary>
+    /// The density steps a shell boundary was put on, ascending: the profile's declared steps and, unless the layout was
+    /// built without them, the jumps <see cref="DensityJumps.Find"/> found for this point mass; steps above or below
+    /// which less than one shell remains are not among them.
+    /// </summary>
+    public IReadOnlyList<DensityJump> Steps { get; }
+
     /// <summary>Points in shell <paramref name="k"/> (0-based), 12 N_side².</summary>
     public int ShellPointCount(int k) => 12 * NSide[k] * NSide[k];
 
@@ -108,13 +117,16 @@ public sealed class ShellLayout
     /// <param name="profile">Target profile.</param>
     /// <param name="count">Number of points N ≥ 1.</param>
     /// <param name="aspect">Target radial thickness over tangential spacing (1 = cubic cells), in [0.05, 20].</param>
+    /// <param name="findSteps">True (default) to treat as steps, besides the declared ones, the density jumps that points of
+    /// this mass cannot resolve (<see cref="DensityJumps.Find"/>), such as a composition change a table resolves over
+    /// one row; false to use only <see cref="IRadialProfile.DensitySteps"/>.</param>
     /// <exception cref="ArgumentOutOfRangeException">N or the aspect is out of range.</exception>
-    public static ShellLayout Build(IRadialProfile profile, int count, double aspect = 1.0)
+    public static ShellLayout Build(IRadialProfile profile, int count, double aspect = 1.0, bool findSteps = true)
     {
         ArgumentNullException.ThrowIfNull(profile);
         ArgumentOutOfRangeException.ThrowIfLessThan(count, 1);
         if (!(aspect >= 0.05 && aspect <= 20)) throw new ArgumentOutOfRangeException(nameof(aspect), aspect, "Aspect must be in [0.05, 20].");
-        var b = new Builder(profile, count, aspect);
+        var b = new Builder(profile, count, aspect, findSteps);
         return b.Run();
     }
 
@@ -150,7 +162,7 @@ public sealed class ShellLayout
             throw new InvalidOperationException(string.Create(inv, $"Outer shell ends at {OuterRadius[^1]} beyond R = {profile.OuterRadius}."));
     }
 
-    private sealed class Builder(IRadialProfile profile, int count, double aspect)
+    private sealed class Builder(IRadialProfile profile, int count, double aspect, bool findSteps)
     {
         private readonly double _m = profile.TotalMass / count;
 
@@ -203,7 +215,7 @@ public sealed class ShellLayout
                 enclosed = end;
                 previous = Chain(end - SumPoints(segment), segment, previous, null, null);
             }
-            return Assemble(c, sides);
+            return Assemble(c, sides, [.. ends.Take(steps).Select(e => e.Step)]);
         }
 
         /// <summary>
@@ -214,10 +226,9 @@ public sealed class ShellLayout
         /// the two — their shared Voronoi face — lies on the step. Both then have about the same thickness and aspects
         /// (d_out/d_in)^{±3/4}, whose product is 1.
         /// </summary>
-        private int Flank(long boundary, double step, bool outward)
+        private int Flank(long boundary, DensityJump step, bool outward)
         {
-            double rs = step, eps = 1e-9 * Math.Max(rs, 1e-300);
-            double dIn = Math.Cbrt(_m / profile.Density(rs - eps)), dOut = Math.Cbrt(_m / profile.Density(Math.Min(rs + eps, profile.OuterRadius)));
+            double dIn = Math.Cbrt(_m / step.InnerDensity), dOut = Math.Cbrt(_m / step.OuterDensity);
             if (!double.IsFinite(dIn) || !double.IsFinite(dOut)) return 0;
             double t = Math.Sqrt(dIn * dOut) * Math.Pow(_targetAspect, 2.0 / 3.0); // thickness a·ℓ with ℓ ∝ a^(−1/3) at fixed volume
             double rb = RadiusAt(boundary);
@@ -246,17 +257,17 @@ public sealed class ShellLayout
         /// equal-mass points either way, and a shell of a dozen points spread over it would stand for it worse than the
         /// neighbouring shell's points.
         /// </summary>
-        private List<(long End, double Step)> SegmentEnds(int c)
+        private List<(long End, DensityJump Step)> SegmentEnds(int c)
         {
-            var ends = new List<(long End, double Step)>();
+            var ends = new List<(long End, DensityJump Step)>();
             long previous = c;
-            foreach (double step in profile.DensitySteps)
+            var jumps = findSteps ? DensityJumps.Find(profile, _m) : DensityJumps.Declared(profile);
+            foreach (var step in jumps)
             {
-                if (!(step > 0 && step < profile.OuterRadius)) continue;
-                long target = c + 12 * (long)Math.Round((profile.EnclosedMass(step) / _m - c) / 12);
+                long target = c + 12 * (long)Math.Round((profile.EnclosedMass(step.Radius) / _m - c) / 12);
                 if (target > previous && target < count) { ends.Add((target, step)); previous = target; }
             }
-            ends.Add((count, double.NaN));
+            ends.Add((count, default));
             for (bool changed = true; changed && ends.Count > 1;)
             {
                 changed = false;
@@ -689,7 +700,7 @@ public sealed class ShellLayout
             }
         }
 
-        private ShellLayout Assemble(int c, List<int> sides)
+        private ShellLayout Assemble(int c, List<int> sides, DensityJump[] steps)
         {
             int k = sides.Count;
             var first = new int[k];
@@ -712,7 +723,7 @@ public sealed class ShellLayout
                 rIn = outer[s];
             }
             double centreR = c <= 1 ? 0.0 : RadiusAt(c / 2.0);
-            return new ShellLayout(count, _m, c, centreR, centreOuter, [.. sides], first, inner, outer, pointR, enclosedCount);
+            return new ShellLayout(count, _m, c, centreR, centreOuter, [.. sides], first, inner, outer, pointR, enclosedCount, steps);
         }
     }
 }

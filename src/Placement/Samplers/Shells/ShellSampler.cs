@@ -18,6 +18,9 @@ public abstract class ShellSampler : IPointSampler
     /// <summary>Name of the aspect parameter shared by every shell sampler.</summary>
     public const string AspectParameter = "aspect";
 
+    /// <summary>Name of the parameter that switches the search for density jumps the points cannot resolve.</summary>
+    public const string FindStepsParameter = "find-steps";
+
     /// <inheritdoc />
     public abstract string Name { get; }
 
@@ -34,6 +37,8 @@ public abstract class ShellSampler : IPointSampler
         {
             new(AspectParameter, SamplerParameterKind.Real, "1", "",
                 "Target radial shell thickness over tangential point spacing (1 gives near-cubic cells).", minimum: 0.05, maximum: 20),
+            new(FindStepsParameter, SamplerParameterKind.Boolean, "true", "",
+                "End shells on density jumps too narrow for the points to resolve (e.g. a composition change over one table row), not only on declared steps (repeated radii)."),
         };
         list.AddRange(ExtraParameters);
         return new SamplerDescription(Name, Summary, list);
@@ -45,10 +50,13 @@ public abstract class ShellSampler : IPointSampler
     {
         ArgumentNullException.ThrowIfNull(request);
         var values = request.ParametersFor(Describe());
-        var layout = ShellLayout.Build(request.Profile, request.Count, values.GetDouble(AspectParameter));
+        var layout = ShellLayout.Build(request.Profile, request.Count, values.GetDouble(AspectParameter), values.GetBoolean(FindStepsParameter));
         var plan = new ShellPlan(layout, values);
-        plan.Notes.Add(string.Create(CultureInfo.InvariantCulture,
+        var inv = CultureInfo.InvariantCulture;
+        plan.Notes.Add(string.Create(inv,
             $"{layout.ShellCount} shells of 12 N_side^2 points, N_side {(layout.ShellCount > 0 ? layout.NSide[0] : 0)} (innermost) to {(layout.ShellCount > 0 ? layout.NSide[^1] : 0)} (outermost); central cluster of {layout.CentreCount} point(s); exactly {layout.Count} points of mass {layout.PointMass:G6}."));
+        if (layout.Steps.Count > 0)
+            plan.Notes.Add(string.Create(inv, $"Shell boundaries on density steps at r = {string.Join(", ", layout.Steps.Select(s => s.Radius.ToString("G6", inv) + (s.Declared ? " (declared)" : string.Create(inv, $" (found: {s.InnerDensity / s.OuterDensity:G3}x over {s.Width:G3})"))))} ({request.Profile.Units.LengthUnitName})."));
         return plan;
     }
 
