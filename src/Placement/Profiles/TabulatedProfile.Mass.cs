@@ -17,6 +17,8 @@ public sealed partial class TabulatedProfile
     private double[] _pR0 = [], _pU0 = [], _pH = [], _pM0 = [];
     private int[] _pSeg = [];
     private double[] _lnC = [];
+    // Per PCHIP segment: e^(ln C + y0), dM/du at the segment start divided by e^(3u) (see LogLogMass).
+    private double[] _segmentScale = [];
     // Per PCHIP panel: Chebyshev series (ChebyshevTerms coefficients) of the mass from the panel start as a function of
     // s ∈ [−1, 1] (u = u0 + (s + 1)h/2), and of its derivative (ChebyshevTerms − 1), flattened panel after panel.
     private double[] _pCheb = [], _pChebD = [];
@@ -191,14 +193,17 @@ public sealed partial class TabulatedProfile
     {
         var c = _density;
         double half = 0.5 * (ub - ua), mid = 0.5 * (ua + ub), sum = 0;
-        double h = c.Hx[k], y0 = c.Y0[k], y1 = c.Y1[k], d0 = c.D0[k], d1 = c.D1[k], lnc = _lnC[k];
+        double h = c.Hx[k], y0 = c.Y0[k], dy = c.Y1[k] - c.Y0[k], d0 = c.D0[k], d1 = c.D1[k];
         for (int i = 0; i < GlNodes.Length; i++)
         {
             double u = mid + half * GlNodes[i];
-            double y = MonotoneCubic.Hermite(u / h, h, y0, y1, d0, d1);
-            sum += GlWeights[i] * Math.Exp(lnc + 3 * u + y);
+            // ln ρ relative to the segment start: ln ρ itself may be −300 or less far out in a steep envelope, and the
+            // rounding of so large an exponent (~1e-14 absolute) would make every evaluation scatter by ~1e-14 relative,
+            // which no panel split can remove; the common factor e^(ln C + y0) is one rounding for the whole segment.
+            double y = MonotoneCubic.Hermite(u / h, h, 0, dy, d0, d1);
+            sum += GlWeights[i] * Math.Exp(3 * u + y);
         }
-        return sum * half;
+        return sum * half * _segmentScale[k];
     }
 
     /// <summary>ln(dM/du) at u = ln(r/R0) in PCHIP segment k.</summary>
@@ -212,11 +217,13 @@ public sealed partial class TabulatedProfile
     {
         var c = _density;
         _lnC = new double[c.Count];
+        _segmentScale = new double[c.Count];
         var b = new PanelLists();
         for (int k = 0; k < c.Count; k++)
         {
             // dM/du = 4π S r³ρ with r = R0 e^u: the constant part ln(4π S R0³) is folded into one number.
             _lnC[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Log(4 * Math.PI * c.Scale[k]) + 3 * Math.Log(c.R0[k]) : 0;
+            _segmentScale[k] = c.Kind[k] == ProfileCurve.LogLog ? Math.Exp(_lnC[k] + c.Y0[k]) : 0;
             if (c.Kind[k] != ProfileCurve.LogLog)
             {
                 // Closed-form panel: series slots stay zero and are never read.

@@ -95,6 +95,33 @@ public class TabulatedProfileTests
         Assert.True(worst < 1e-4, $"worst relative M error {worst} at r = {worstX}");
     }
 
+    [Theory]
+    [InlineData(100.0)]
+    [InlineData(300.0)]
+    [InlineData(700.0)]
+    public void ExponentialAtmosphere_OverHundredsOfDecades_BuildsAndIntegratesExactly(double a)
+    {
+        // Invented: ρ = e^(−a r) on 2000 equal rows of [0, 1]; a = 700 spans 304 decades. Far out ln ρ is −700, and
+        // e^(ln ρ) there carries a rounding of ~1e-14 relative, which once made every mass panel fail its 1e-14 check and
+        // bisect without end (a = 140 already hung). M(r) must equal the integral of the interpolated density, here by an
+        // independent adaptive Gauss–Legendre quadrature of 4πr²ρ(r) row interval by row interval (1e-13 relative), and
+        // r(M) must invert it.
+        var r = Enumerable.Range(0, 2000).Select(i => i / 1999.0).ToArray();
+        var rho = r.Select(x => Math.Exp(-a * x)).ToArray();
+        var p = new TabulatedProfile(r, rho, UnitSystem.Cgs);
+        p.CheckValidity();
+        double sum = 0, worst = 0;
+        for (int i = 0; i + 1 < r.Length; i++)
+        {
+            sum += Placement.Numerics.AdaptiveQuadrature.Integrate(x => 4 * Math.PI * x * x * p.Density(x), r[i], r[i + 1], 1e-14).Value;
+            if (sum <= 0) continue;
+            worst = Math.Max(worst, Math.Abs(p.EnclosedMass(r[i + 1]) / sum - 1));
+            if (i % 50 == 49 && p.EnclosedMass(r[i + 1]) < p.TotalMass * (1 - 1e-9))
+                Assert.True(Math.Abs(p.RadiusOfEnclosedMass(p.EnclosedMass(r[i + 1])) / r[i + 1] - 1) < 1e-10, $"r(M(r)) at {r[i + 1]}");
+        }
+        Assert.True(worst < 1e-12, $"a = {a}: worst relative M error {worst}");
+    }
+
     [Fact]
     public void DensityStep_RepeatedRadius_IsRightContinuousAndMassExact()
     {
