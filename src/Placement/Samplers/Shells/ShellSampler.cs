@@ -54,10 +54,21 @@ public abstract class ShellSampler : IPointSampler
         var plan = new ShellPlan(layout, values);
         var inv = CultureInfo.InvariantCulture;
         plan.Notes.Add(string.Create(inv,
-            $"{layout.ShellCount} shells of 12 N_side^2 points, N_side {(layout.ShellCount > 0 ? layout.NSide[0] : 0)} (innermost) to {(layout.ShellCount > 0 ? layout.NSide[^1] : 0)} (outermost); central cluster of {layout.CentreCount} point(s); exactly {layout.Count} points of mass {layout.PointMass:G6}."));
+            $"{layout.ShellCount} shells of 12 N_side^2 points, N_side {NSideRange(layout)}; central cluster of {layout.CentreCount} point(s); exactly {layout.Count} points of mass {layout.PointMass:G6}."));
         if (layout.Steps.Count > 0)
             plan.Notes.Add(string.Create(inv, $"Shell boundaries on density steps at r = {string.Join(", ", layout.Steps.Select(s => s.Radius.ToString("G6", inv) + (s.Declared ? " (declared)" : string.Create(inv, $" (found: {s.InnerDensity / s.OuterDensity:G3}x over {s.Width:G3})"))))} ({request.Profile.Units.LengthUnitName})."));
         return plan;
+    }
+
+    // "a–b (innermost c, outermost d)": shells grow toward the middle of a centrally concentrated body and shrink again in
+    // its envelope, so the two ends alone understate the largest shells.
+    private static string NSideRange(ShellLayout layout)
+    {
+        if (layout.ShellCount == 0) return "none";
+        var n = layout.NSide;
+        int lo = int.MaxValue, hi = 0;
+        for (int i = 0; i < layout.ShellCount; i++) { lo = Math.Min(lo, n[i]); hi = Math.Max(hi, n[i]); }
+        return string.Create(CultureInfo.InvariantCulture, $"{lo}-{hi} (innermost {n[0]}, outermost {n[layout.ShellCount - 1]})");
     }
 
     /// <inheritdoc />
