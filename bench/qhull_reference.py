@@ -30,6 +30,9 @@ def voronoi_route(pts):
 
 
 def main():
+    if len(sys.argv) > 1 and sys.argv[1] in ("-h", "--help"):
+        print(__doc__)
+        return
     n = int(sys.argv[1]) if len(sys.argv) > 1 else 100_000
     repeats = int(sys.argv[2]) if len(sys.argv) > 2 else 1
     pts = np.random.default_rng(2026).random((n, 3))
