@@ -30,7 +30,11 @@ public sealed record TessellationOptions
     /// </summary>
     public double SphereTolerance { get; init; } = 1e-4;
 
-    /// <summary>Two generators closer than this fraction of the mean spacing (V/N)^{1/3} are an error. Default 1e-10.</summary>
+    /// <summary>
+    /// Two generators closer than this fraction of the mean spacing (V/N)^{1/3}, or of the generator's distance from the
+    /// coordinate origin where that is smaller (the finer scale of a cusp at the origin), are an error; coincident ones
+    /// always. Default 1e-10.
+    /// </summary>
     public double DuplicateTolerance { get; init; } = 1e-10;
 
     /// <summary>Mean points per cell of the search grid. Default 1.5 (measured fastest for uniform points).</summary>

@@ -126,6 +126,29 @@ public class VoronoiTessellationTests
     }
 
     [Fact]
+    public void PointsAroundACuspAtTheOrigin_FarCloserThanTheMeanSpacing_AreNotDuplicates()
+    {
+        // A steep cusp at the origin puts its innermost points far closer together than any fraction of the mean spacing
+        // (an invented r^-2.9 cusp, 2e4 HEALPix-shell points: 8e-12 apart for a mean spacing of 0.6, once reported as
+        // coinciding). Here a cluster of 20 points within 1e-12 of the origin, 10 of them at one radius, among 2000 random
+        // points of the unit ball: a valid tessellation; two of them made to coincide are still an error.
+        var (x, y, z) = TestPoints.UniformBall(2000, 91, 1.0);
+        var rng = new Placement.Random.KeyedRandom(92, 0);
+        for (int k = 0; k < 20; k++)
+        {
+            double u = 2 * rng.NextDouble() - 1, phi = 2 * Math.PI * rng.NextDouble(), s = Math.Sqrt(1 - u * u);
+            double r = k < 10 ? 1e-12 : 1e-12 * rng.NextDouble();
+            x[k] = r * s * Math.Cos(phi); y[k] = r * s * Math.Sin(phi); z[k] = r * u;
+        }
+        var domain = TessellationDomain.Sphere(0, 0, 0, 1.0);
+        var cells = VoronoiTessellation.Compute(x, y, z, domain);
+        cells.CheckValidity(x, y, z);
+        x[7] = x[3]; y[7] = y[3]; z[7] = z[3];
+        var e = Assert.Throws<ArgumentException>(() => VoronoiTessellation.Compute(x, y, z, domain));
+        Assert.Contains("Points 3 and 7 coincide", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void PointOutsideDomain_IsRejected()
     {
         var e = Assert.Throws<ArgumentException>(() => VoronoiTessellation.Compute([0.5, 1.5], [0.5, 0.5], [0.5, 0.5], TessellationDomain.UnitCube()));
