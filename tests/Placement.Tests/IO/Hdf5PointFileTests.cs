@@ -264,6 +264,28 @@ with h5py.File(sys.argv[1], 'w') as f:
         Assert.Contains("missing dataset '/points/mass'", e.Message, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("position", 7, "'/points/position' row 2, column y: NaN is not a finite coordinate")]
+    [InlineData("mass", 2, "'/points/mass' row 2: -1 is not a finite mass ≥ 0")]
+    public void Hdf5_Reader_NamesANonFiniteCoordinateOrANegativeMass(string column, int flatIndex, string expected)
+    {
+        // A NaN coordinate used to surface only as a tessellation error about a sphere of radius NaN.
+        using var dir = TestTables.TempDir();
+        string path = dir.File("bad-value.h5");
+        var file = OurRootWith(4);
+        var group = (H5Group)file["points"];
+        var old = (H5Dataset)group[column];
+        var data = column == "position" ? Enumerable.Range(0, 12).Select(i => 0.1 * i).ToArray() : [1.0, 1.0, 1.0, 1.0];
+        data[flatIndex] = column == "position" ? double.NaN : -1.0;
+        var copy = new H5Dataset(data, fileDims: column == "position" ? [4UL, 3UL] : [4UL]);
+        foreach (var attribute in old.Attributes) copy.Attributes[attribute.Key] = attribute.Value;
+        group[column] = copy;
+        file.Write(path);
+        var e = Assert.Throws<PointFileFormatException>(() => Hdf5PointReader.Read(path));
+        Assert.Contains(expected, e.Message, StringComparison.Ordinal);
+        Assert.Contains(path, e.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Hdf5_Reader_RejectsADatasetOfTheWrongLength()
     {

@@ -85,11 +85,17 @@ public static class Hdf5PointReader
         var points = new PointSet(n, units) { Provenance = provenance };
         for (int i = 0, j = 0; i < n; i++, j += 3)
         {
+            for (int c = 0; c < 3; c++)
+                if (!double.IsFinite(position[j + c]))
+                    throw new PointFileFormatException(path, $"'/{Hdf5Layout.PointsGroup}/{PointColumnNames.Position}' row {i}, column {"xyz"[c]}: {position[j + c]} is not a finite coordinate.");
             points.X[i] = position[j];
             points.Y[i] = position[j + 1];
             points.Z[i] = position[j + 2];
         }
         datasets.Float64(PointColumnNames.Mass, 1).CopyTo(points.Mass, 0);
+        for (int i = 0; i < n; i++)
+            if (!double.IsFinite(points.Mass[i]) || points.Mass[i] < 0)
+                throw new PointFileFormatException(path, $"'/{Hdf5Layout.PointsGroup}/{PointColumnNames.Mass}' row {i}: {points.Mass[i]} is not a finite mass ≥ 0.");
         datasets.Float64(PointColumnNames.TargetDensity, 1).CopyTo(points.TargetDensity, 0);
         datasets.Int32(PointColumnNames.Layer).CopyTo(points.Layer, 0);
         var table = new PointTable(points) { Ids = datasets.Int64(PointColumnNames.Id) };
