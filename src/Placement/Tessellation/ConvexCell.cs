@@ -362,10 +362,7 @@ internal sealed class ConvexCell
             MaxRadiusSquared = Math.Max(oldMax, newMax);
             return true;
         }
-        double max = 0;
-        var r2 = _vr2.AsSpan(0, _triCount);
-        foreach (double v in r2) if (v > max) max = v;
-        MaxRadiusSquared = max;
+        MaxRadiusSquared = System.Numerics.Tensors.TensorPrimitives.Max<double>(_vr2.AsSpan(0, _triCount));
         return true;
     }
 
