@@ -63,8 +63,7 @@ public sealed class GlassTile
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         if (File.Exists(path) && !overwrite) throw new IOException($"Glass cache '{path}' exists; refusing to overwrite it.");
-        string dir = Path.GetDirectoryName(Path.GetFullPath(path))!;
-        Directory.CreateDirectory(dir);
+        string dir = PrepareDirectory(path);
         string tmp = Path.Combine(dir, "." + Path.GetFileName(path) + "." + Guid.NewGuid().ToString("N")[..8] + ".tmp");
         try
         {
@@ -85,6 +84,26 @@ public sealed class GlassTile
         {
             if (File.Exists(tmp)) File.Delete(tmp);
         }
+    }
+
+    /// <summary>
+    /// Creates the directory a cache file at <paramref name="path"/> goes into and returns it; callers that make the tile
+    /// first call it before the work, so an unusable path fails at once.
+    /// </summary>
+    /// <exception cref="IOException">The directory cannot be created; the message names the cache file.</exception>
+    internal static string PrepareDirectory(string path)
+    {
+        string dir = Path.GetDirectoryName(Path.GetFullPath(path))!;
+        try
+        {
+            Directory.CreateDirectory(dir);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Without this the command line reported only "input file not found: <directory>".
+            throw new IOException($"Glass cache '{path}' cannot be written: its directory '{dir}' cannot be created ({e.Message}).", e);
+        }
+        return dir;
     }
 
     /// <summary>Reads a tile written by <see cref="Save"/>.</summary>

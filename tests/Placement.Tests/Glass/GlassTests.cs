@@ -76,4 +76,31 @@ public class GlassTests
             Directory.Delete(dir, true);
         }
     }
+
+    [Fact]
+    public void GlassCache_InAnUnusableDirectory_IsAnErrorNamingTheCache()
+    {
+        // A regular file where the cache's directory should be: the directory cannot be created. The sampler must say
+        // which file it wanted (the command line once said only "input file not found: <directory>"); it now checks the
+        // directory before it relaxes the tile.
+        string dir = Directory.CreateTempSubdirectory("glass").FullName;
+        try
+        {
+            string blocker = Path.Combine(dir, "blocker");
+            File.WriteAllText(blocker, "a file, not a directory");
+            string cache = Path.Combine(blocker, "sub", "tile.glass");
+            var sampler = new Placement.Samplers.Glass.GlassSampler();
+            var request = new Placement.Samplers.SamplingRequest(new Placement.Profiles.Polytrope(1.5, 1, 1), 500)
+            {
+                Parameters = sampler.Describe().Parse(new Dictionary<string, string> { ["tile-file"] = cache, ["tile-points"] = "512" }),
+            };
+            var e = Assert.Throws<IOException>(() => Placement.Samplers.PointSampling.Place(sampler, request));
+            Assert.Contains($"Glass cache '{cache}' cannot be written", e.Message, StringComparison.Ordinal);
+            Assert.False(File.Exists(cache));
+        }
+        finally
+        {
+            Directory.Delete(dir, true);
+        }
+    }
 }

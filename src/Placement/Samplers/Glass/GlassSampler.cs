@@ -109,6 +109,7 @@ public sealed class GlassSampler : IPointSampler
                 throw new ArgumentException($"Glass cache '{cache}' holds a {loaded.Count}-point tile; tile-points is {tilePoints}.");
             return loaded;
         }
+        if (cache.Length > 0) GlassTile.PrepareDirectory(cache);
         var tile = GlassMaker.Make(tilePoints, request.Seed, new GlassSettings { MaxIterations = iterations }, request.Parallel);
         if (cache.Length > 0) tile.Save(cache);
         return tile;
