@@ -59,6 +59,20 @@ public sealed class EndToEndTests : IDisposable
     }
 
     [Fact]
+    public void Place_WithPlotsPointingAtAFile_RefusesUpFront_AndWritesNothing()
+    {
+        // Found late, this once left the point file written and said only that "the file already exists".
+        string blocker = PathOf("figures");
+        File.WriteAllText(blocker, "a file, not a directory");
+        string h5 = PathOf("points.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "100", "-o", h5, "--plots", blocker, "--overwrite");
+        Assert.Equal(ExitCodes.OutputRefused, code);
+        Assert.Contains("--plots", error);
+        Assert.Contains("is a file", error);
+        Assert.False(File.Exists(h5));
+    }
+
+    [Fact]
     public void BadProfileTable_GivesBadInputExitCode_WithFileLineAndValue()
     {
         string table = PathOf("bad.txt");

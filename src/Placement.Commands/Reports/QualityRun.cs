@@ -48,7 +48,12 @@ internal static class QualityRun
     /// <summary>Refuses up front when a figure file exists and overwrite was not asked for.</summary>
     public static void CheckPlotsWritable(string? directory, bool overwrite)
     {
-        if (directory is null || overwrite || !Directory.Exists(directory)) return;
+        if (directory is null) return;
+        // A file where the figures' directory should go cannot be replaced by one, --overwrite or not; found late it left
+        // the point file written and said only ".NET: the file already exists".
+        if (File.Exists(directory))
+            throw new CliException(ExitCodes.OutputRefused, $"--plots '{directory}' is a file; the figures need a directory there.");
+        if (overwrite || !Directory.Exists(directory)) return;
         foreach (string name in QualityFigures.Names)
             foreach (string ext in new[] { ".png", ".svg" })
                 if (File.Exists(Path.Combine(directory, name + ext)))
