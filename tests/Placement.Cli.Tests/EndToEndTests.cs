@@ -119,6 +119,14 @@ public sealed class EndToEndTests : IDisposable
         (code, _, error) = CliRunner.Run("demo", "-o", dir, "-n", "3000", "--quiet");
         Assert.Equal(ExitCodes.OutputRefused, code);
         Assert.Contains("--overwrite", error);
+
+        // A file where the directory should be: a clear refusal (it used to be .NET's "the file already exists").
+        string blocker = PathOf("demo-file");
+        File.WriteAllText(blocker, "precious");
+        (code, _, error) = CliRunner.Run("demo", "-o", blocker, "-n", "3000", "--quiet");
+        Assert.Equal(ExitCodes.OutputRefused, code);
+        Assert.Contains("is a file", error);
+        Assert.Equal("precious", File.ReadAllText(blocker));
     }
 
     [Fact]

@@ -43,6 +43,8 @@ internal static class DemoCommand
             if (n < 1) throw new CliException(ExitCodes.Usage, $"--count must be >= 1, got {n}.");
             string h5 = Path.Combine(dir, "demo-star.h5"), vtu = Path.Combine(dir, "demo-star.vtu"), report = Path.Combine(dir, "demo-star.report.json");
             string figures = Path.Combine(dir, "figures");
+            if (File.Exists(dir))
+                throw new CliException(ExitCodes.OutputRefused, $"--output-dir '{dir}' is a file; the demo writes its files into a directory there.");
             Directory.CreateDirectory(dir);
             OutputArguments.CheckWritable(replace, h5, vtu, report);
             QualityRun.CheckPlotsWritable(figures, replace);
