@@ -69,6 +69,9 @@ public static class CliApp
     /// <summary>Turns an exception into one clear message and an exit code.</summary>
     internal static int Report(Exception ex, TextWriter error)
     {
+        // The library's parameter names (" (Parameter 'path')", appended by ArgumentException and carried into the
+        // messages commands rethrow) mean nothing on the command line.
+        error = new ParameterNameFilter(error);
         while (ex is AggregateException { InnerExceptions.Count: 1 } agg) ex = agg.InnerExceptions[0];
         switch (ex)
         {
@@ -94,5 +97,16 @@ public static class CliApp
                 error.WriteLine($"placement: internal error: {ex.GetType().Name}: {ex.Message}");
                 return ExitCodes.Internal;
         }
+    }
+
+    /// <summary>Writes error lines without the " (Parameter 'name')" suffixes of argument exceptions.</summary>
+    private sealed class ParameterNameFilter(TextWriter inner) : TextWriter
+    {
+        public override System.Text.Encoding Encoding => inner.Encoding;
+
+        public override void Write(char value) => inner.Write(value);
+
+        public override void WriteLine(string? value) =>
+            inner.WriteLine(value is null ? null : System.Text.RegularExpressions.Regex.Replace(value, @" \(Parameter '[^']*'\)", ""));
     }
 }

@@ -73,6 +73,15 @@ public sealed class EndToEndTests : IDisposable
     }
 
     [Fact]
+    public void UnknownOutputExtension_IsAUsageError_WithoutTheLibrarysParameterName()
+    {
+        var (code, _, error) = CliRunner.Run("place", "-p", "uniform:mass=1,radius=1", "-n", "100", "-o", PathOf("points.foo"));
+        Assert.Equal(ExitCodes.Usage, code);
+        Assert.Contains("'.foo'", error);
+        Assert.DoesNotContain("(Parameter", error);
+    }
+
+    [Fact]
     public void BadProfileTable_GivesBadInputExitCode_WithFileLineAndValue()
     {
         string table = PathOf("bad.txt");
