@@ -13,6 +13,25 @@ public sealed class EndToEndTests : IDisposable
     private string PathOf(string name) => Path.Combine(_dir, name);
 
     [Fact]
+    public void Place_TableStartingFarOffCentre_WarnsThatMostMassIsExtrapolated_AndStillPlaces()
+    {
+        // Invented envelope-only table, ρ ∝ r^-3 from 1e13 cm: its first slope is clamped to −2.5 and continued inward,
+        // which puts about 46 % of the mass inside the first row. The user is told so; the run itself goes on.
+        string table = Path.Combine(_dir, "invented-envelope-only.txt");
+        var rows = Enumerable.Range(0, 91).Select(i => 1 + i / 10.0)
+            .Select(x => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{x * 1e13:G17} {1e-10 * Math.Pow(x, -3):G17}"));
+        File.WriteAllText(table, "# invented envelope-only table\nr[cm] rho[g/cm^3]\n" + string.Join("\n", rows) + "\n");
+        string h5 = Path.Combine(_dir, "envelope-only.h5");
+        var (code, _, error) = CliRunner.Run("place", "-p", table, "--units", "cgs", "-n", "500", "-o", h5);
+        Assert.True(code == ExitCodes.Ok, error);
+        Assert.Contains("of the mass lies inside the table's first row (r = 1E+13 cm)", error);
+        Assert.True(File.Exists(h5));
+        var (quietCode, _, quietError) = CliRunner.Run("place", "-p", table, "--units", "cgs", "-n", "500", "-o", h5, "--overwrite", "-q");
+        Assert.Equal(ExitCodes.Ok, quietCode);
+        Assert.DoesNotContain("first row", quietError);
+    }
+
+    [Fact]
     public void Place_ThenCheck_RoundTripsThroughHdf5_AndWritesReportAndFigures()
     {
         string h5 = PathOf("p.h5"), report = PathOf("r.json"), figures = PathOf("figs");

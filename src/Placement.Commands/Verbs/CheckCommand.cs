@@ -49,7 +49,7 @@ internal static class CheckCommand
             {
                 throw new CliException(ExitCodes.BadInput, ex.Message, ex);
             }
-            var (body, _) = core.Apply(parse, profile.Load(parse));
+            var (body, _) = core.Apply(parse, profile.Load(parse, context));
             if (table.Points.Units.Name != body.Units.Name)
                 throw new CliException(ExitCodes.BadInput,
                     $"'{path}' is in '{table.Points.Units.Name}' units but the profile is in '{body.Units.Name}'; pass --units {table.Points.Units.Name}.");

@@ -32,7 +32,7 @@ internal static class CompareCommand
         command.Options.Add(neighbours);
         command.SetAction(parse =>
         {
-            var body = profile.Load(parse);
+            var body = profile.Load(parse, context);
             var catalog = SamplerCatalogs.For(context);
             var names = (parse.GetValue(samplers) ?? []).SelectMany(s => s.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).ToList();
             if (names.Count == 0) names = [.. catalog.Names];

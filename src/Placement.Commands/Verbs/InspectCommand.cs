@@ -69,7 +69,7 @@ internal static class InspectCommand
                     units = summary.Units.Name,
                     summary.TotalMass, summary.OuterRadius, summary.CentralDensity, summary.MeanDensity, summary.MaxDensity,
                     summary.MinPositiveDensity, summary.DensityContrast, summary.Radius10, summary.HalfMassRadius, summary.Radius90,
-                    summary.QuantityNames, summary.Fingerprint, summary.DensitySteps,
+                    summary.QuantityNames, summary.Fingerprint, summary.DensitySteps, summary.FirstRowRadius, summary.ExtrapolatedCoreFraction,
                     bindingEnergy = Bodies.GravitationalEnergy.OfProfile(body),
                     corePotentialEnergy = Bodies.GravitationalEnergy.OfProfileInCentralField(body),
                     virialRatio = resolution is null ? double.NaN : Bodies.ThermalEnergy.VirialRatio(body),

@@ -53,7 +53,9 @@ internal static class PlaceCommand
             }
             OutputArguments.CheckWritable(replace, path);
             outputs.CheckReportOutputs(parse);
-            var (body, replaced) = core.Apply(parse, context.Stage("loading profile", _ => profile.Load(parse)));
+            var loaded = context.Stage("loading profile", _ => profile.Load(parse));
+            ProfileArguments.Notify(context, loaded);
+            var (body, replaced) = core.Apply(parse, loaded);
             var bodyRequest = bodyOptions.Parse(parse, body, sampling.ModeOf(parse) == SamplingMode.MeshGenerators);
             bool check = outputs.WantsQuality(parse) && !bodyOptions.SkipsCheck(parse);
             if (bodyOptions.SkipsCheck(parse) && (parse.GetValue(outputs.Plots) is not null || bodyRequest is null))

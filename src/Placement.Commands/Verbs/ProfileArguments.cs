@@ -60,9 +60,24 @@ internal sealed class ProfileArguments
         command.Options.Add(EnclosedMassColumn);
     }
 
-    /// <summary>Loads the profile the options name.</summary>
+    /// <summary>Loads the profile the options name; warnings about it (<see cref="ProfileSummary.Notes"/>) go to
+    /// <paramref name="context"/>'s informational lines when one is given.</summary>
     /// <exception cref="CliException">Bad specification (usage) or unreadable table (bad input).</exception>
-    public IRadialProfile Load(ParseResult parse)
+    public IRadialProfile Load(ParseResult parse, CliContext? context = null)
+    {
+        var profile = LoadQuietly(parse);
+        if (context is not null) Notify(context, profile);
+        return profile;
+    }
+
+    /// <summary>Writes the warnings about a loaded table (<see cref="ProfileSummary.Notes"/>) as informational lines.</summary>
+    public static void Notify(CliContext context, IRadialProfile profile)
+    {
+        if (profile is not TabulatedProfile) return;
+        foreach (string note in ProfileSummary.Of(profile).Notes()) context.Info(note);
+    }
+
+    private IRadialProfile LoadQuietly(ParseResult parse)
     {
         string spec = parse.GetValue(Profile)!.Trim();
         UnitSystem units;

@@ -19,6 +19,9 @@ namespace Placement.Profiles;
 /// <param name="QuantityNames">Names of the extra quantities the profile carries.</param>
 /// <param name="Fingerprint">The profile's fingerprint.</param>
 /// <param name="DensitySteps">Radii of the profile's density steps, length units (empty when it has none; null when not given).</param>
+/// <param name="FirstRowRadius">For a table that starts off centre, its first row's radius, length units; 0 otherwise.</param>
+/// <param name="ExtrapolatedCoreFraction">The share of the mass inside <paramref name="FirstRowRadius"/>, from the core
+/// extrapolation rather than from rows (see <see cref="TabulatedProfile.ExtrapolatedCoreMass"/>); 0 otherwise.</param>
 public sealed record ProfileSummary(
     UnitSystem Units,
     double TotalMass,
@@ -33,8 +36,24 @@ public sealed record ProfileSummary(
     double Radius90,
     IReadOnlyList<string> QuantityNames,
     string Fingerprint,
-    IReadOnlyList<double>? DensitySteps = null)
+    IReadOnlyList<double>? DensitySteps = null,
+    double FirstRowRadius = 0,
+    double ExtrapolatedCoreFraction = 0)
 {
+    /// <summary>
+    /// Share of the mass from a table's core extrapolation above which <see cref="Notes"/> warns: 1 %, a judgement (common
+    /// practice for a model's first zone is a tiny fraction of its mass).
+    /// </summary>
+    public const double ExtrapolatedCoreNoteFraction = 0.01;
+
+    /// <summary>Warnings about the profile a user should see before placing points (empty when there are none).</summary>
+    public IReadOnlyList<string> Notes()
+    {
+        if (!(ExtrapolatedCoreFraction > ExtrapolatedCoreNoteFraction)) return [];
+        return [string.Create(CultureInfo.InvariantCulture,
+            $"note: {ExtrapolatedCoreFraction:P1} of the mass lies inside the table's first row (r = {FirstRowRadius:G6} {Units.LengthUnitName}), where the density is extrapolated inward, not tabulated; add rows toward the centre if that is not intended.")];
+    }
+
     /// <summary>Computes the summary; densities are sampled at 1000 radii from <see cref="ProfileSampling.Radii"/>.</summary>
     /// <exception cref="ArgumentNullException"><paramref name="profile"/> is null.</exception>
     public static ProfileSummary Of(IRadialProfile profile)
@@ -52,7 +71,9 @@ public sealed record ProfileSummary(
         foreach (var q in profile.Quantities) names.Add(q.Name);
         return new ProfileSummary(profile.Units, m, big, profile.Density(0), 3 * m / (4 * Math.PI * big * big * big), max, min, max / min,
             profile.RadiusOfEnclosedMass(0.1 * m), profile.RadiusOfEnclosedMass(0.5 * m), profile.RadiusOfEnclosedMass(0.9 * m),
-            names, profile.Fingerprint, [.. profile.DensitySteps]);
+            names, profile.Fingerprint, [.. profile.DensitySteps],
+            profile is TabulatedProfile t ? t.RowRadii[0] : 0,
+            profile is TabulatedProfile u && m > 0 ? u.ExtrapolatedCoreMass / m : 0);
     }
 
     /// <summary>A few lines of text with units, e.g. for a command-line report.</summary>
@@ -70,6 +91,8 @@ public sealed record ProfileSummary(
         sb.AppendLine($"quantities       {(QuantityNames.Count == 0 ? "none" : string.Join(", ", QuantityNames))}");
         if (DensitySteps is { Count: > 0 } steps)
             sb.AppendLine(string.Create(c, $"density steps    {string.Join(", ", steps.Select(r => r.ToString("G6", c)))} {l}"));
+        if (ExtrapolatedCoreFraction > 0)
+            sb.AppendLine(string.Create(c, $"below first row  {ExtrapolatedCoreFraction:P2} of the mass inside r = {FirstRowRadius:G6} {l} (extrapolated inward)"));
         sb.Append($"fingerprint      {Fingerprint}");
         return sb.ToString();
     }

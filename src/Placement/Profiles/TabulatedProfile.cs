@@ -127,6 +127,13 @@ public sealed partial class TabulatedProfile : IRadialProfile
     /// <summary>Row densities, mass/length³.</summary>
     public ReadOnlySpan<double> RowDensities => _rho;
 
+    /// <summary>
+    /// Mass inside the first row's radius when the table starts off centre (r0 &gt; 0), mass units: the part of the body
+    /// that comes from the core extrapolation, not from the rows; 0 when the table starts at r = 0. A large share (a table
+    /// that starts far out, or a steep first segment continued inward as a cusp) usually means rows are missing.
+    /// </summary>
+    public double ExtrapolatedCoreMass => _r[0] > 0 ? EnclosedMass(_r[0]) : 0.0;
+
     /// <summary>Number of panels of the precomputed mass integral.</summary>
     public int PanelCount => _pM0.Length - 1;
 

@@ -46,6 +46,38 @@ public class TabulatedProfileTests
         }
     }
 
+    [Theory]
+    [InlineData(0.2, true)]
+    [InlineData(0.05, false)]
+    public void TableStartingOffCentre_ReportsTheMassItsCoreExtrapolationAdds(double r0, bool noted)
+    {
+        // ρ = 1/r tabulated from r0 to 1 (a cusp, slope −1, continued inward as the same power law): the mass inside r0 is
+        // ∫0^r0 4πs² s⁻¹ ds = 2π r0² of a total 2π, so the share is r0² (closed form of the integral): 4 % (noted, above
+        // the 1 % threshold) or 0.25 % (not).
+        double[] r = Geometric(r0, 1, 60);
+        var p = new TabulatedProfile(r, r.Select(x => 1 / x).ToArray(), UnitSystem.Dimensionless);
+        Assert.Equal(2 * Math.PI * r0 * r0, p.ExtrapolatedCoreMass, 1e-12 * 2 * Math.PI);
+        var summary = ProfileSummary.Of(p);
+        Assert.Equal(r0, summary.FirstRowRadius);
+        Assert.Equal(r0 * r0, summary.ExtrapolatedCoreFraction, 1e-12);
+        Assert.Contains("below first row", summary.ToString());
+        var notes = summary.Notes();
+        Assert.Equal(noted, notes.Count == 1);
+        if (noted) Assert.Contains("4.0 % of the mass lies inside the table's first row", notes[0]);
+    }
+
+    [Fact]
+    public void TableStartingAtTheCentre_HasNoExtrapolatedCore()
+    {
+        double[] r = [0, 0.5, 1];
+        var p = new TabulatedProfile(r, [2.0, 1.5, 1.0], UnitSystem.Dimensionless);
+        Assert.Equal(0, p.ExtrapolatedCoreMass);
+        var summary = ProfileSummary.Of(p);
+        Assert.Equal(0, summary.ExtrapolatedCoreFraction);
+        Assert.Empty(summary.Notes());
+        Assert.DoesNotContain("below first row", summary.ToString());
+    }
+
     [Fact]
     public void FlatCoreSampledOffCentre_KeepsAFiniteCentralDensity()
     {
