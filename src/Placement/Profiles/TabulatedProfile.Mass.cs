@@ -257,9 +257,10 @@ public sealed partial class TabulatedProfile
         double whole = LogLogMass(k, a, b);
         double mid = 0.5 * (a + b);
         double fine = LogLogMass(k, a, mid) + LogLogMass(k, mid, b);
-        bool ok = Math.Abs(whole - fine) <= PanelTolerance * fine && Math.Abs(LogDmDu(k, b) - LogDmDu(k, a)) <= MaxPanelLogVariation;
+        double tolerance = SegmentTolerance(k);
+        bool ok = Math.Abs(whole - fine) <= tolerance * fine && Math.Abs(LogDmDu(k, b) - LogDmDu(k, a)) <= MaxPanelLogVariation;
         var coef = new double[ChebyshevTerms];
-        if (ok || depth == 0) ok = FitPanel(k, a, b, whole, coef) || depth == 0;
+        if (ok || depth == 0) ok = FitPanel(k, a, b, whole, coef, tolerance) || depth == 0;
         if (ok)
         {
             var d = new double[ChebyshevTerms - 1];
@@ -314,7 +315,26 @@ public sealed partial class TabulatedProfile
     }
 
     /// <summary>Fits the Chebyshev series of the mass from u = a on [a, b]; true when it matches the quadrature to 1e-14 of the panel mass at the check points.</summary>
-    private bool FitPanel(int k, double a, double b, double whole, double[] coef)
+    /// <summary>
+    /// Relative tolerance of segment k's panels: <see cref="PanelTolerance"/>, or the rounding of its integrand where that
+    /// is larger. The exponent 3u + y(u) is a cubic whose terms reach |Δy| + h(|d0| + |d1|) + 3h; each evaluation is off
+    /// by about that times the unit roundoff, relative, and no panel split removes it. Where ln ρ falls by tens within
+    /// one row (an invented 1e-3 → 1e-20 last row) that noise passed 1e-14, every panel failed its check and the panels
+    /// split to depth 30 (the constructor never returned).
+    /// </summary>
+    private double SegmentTolerance(int k)
+    {
+        var c = _density;
+        double h = c.Hx[k];
+        double terms = Math.Abs(c.Y1[k] - c.Y0[k]) + Math.Abs(h) * (Math.Abs(c.D0[k]) + Math.Abs(c.D1[k]) + 3);
+        return Math.Max(PanelTolerance, RoundingMargin * UnitRoundoff * terms);
+    }
+
+    // Unit roundoff of double (2^-53) and the margin over it that the panel checks allow (two noisy values compared).
+    private const double UnitRoundoff = 1.1102230246251565e-16;
+    private const double RoundingMargin = 32;
+
+    private bool FitPanel(int k, double a, double b, double whole, double[] coef, double tolerance)
     {
         Span<double> s = stackalloc double[ChebyshevTerms];
         Span<double> f = stackalloc double[ChebyshevTerms];
@@ -328,7 +348,7 @@ public sealed partial class TabulatedProfile
         {
             double sj = Math.Cos(Math.PI * j / ChebyshevTerms);
             double exact = LogLogMass(k, a, a + (sj + 1) * half);
-            if (Math.Abs(ChebyshevSeries.Evaluate(coef, sj) - exact) > PanelTolerance * whole) return false;
+            if (Math.Abs(ChebyshevSeries.Evaluate(coef, sj) - exact) > tolerance * whole) return false;
         }
         return true;
     }

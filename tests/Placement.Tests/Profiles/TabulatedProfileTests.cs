@@ -154,6 +154,37 @@ public class TabulatedProfileTests
         Assert.True(worst < 1e-12, $"a = {a}: worst relative M error {worst}");
     }
 
+    [Theory]
+    [InlineData(1e-20)]
+    [InlineData(1e-60)]
+    [InlineData(1e-200)]
+    public void LastRowFallingByTensOfDecades_BuildsAndIntegratesExactly(double last)
+    {
+        // Invented: a thin envelope 0.02 (1 − (r − 6)/0.6)² + 1e-3 on 31 rows of [6, 6.6] over a centre row, with a tiny but
+        // positive density on the last row (as a model's surface zone may carry). ln ρ falls by 40 to 455 within that one
+        // row; the rounding of so steep a cubic once made every mass panel there fail its 1e-14 check, and the constructor
+        // split panels to depth 30 without returning. M(r) must equal an independent adaptive Gauss–Legendre quadrature of
+        // 4πr²ρ(r), row interval by row interval (1e-14 relative per interval).
+        var r = new List<double> { 0 };
+        var rho = new List<double> { 1.0 };
+        for (int i = 0; i <= 30; i++)
+        {
+            double x = 6 + 0.6 * i / 30, u = 1 - (x - 6) / 0.6;
+            r.Add(x);
+            rho.Add(i == 30 ? last : 0.02 * u * u + 1e-3);
+        }
+        var p = new TabulatedProfile(r, rho, UnitSystem.Dimensionless);
+        p.CheckValidity();
+        double sum = 0, worst = 0;
+        for (int i = 0; i + 1 < r.Count; i++)
+        {
+            sum += Placement.Numerics.AdaptiveQuadrature.Integrate(x => 4 * Math.PI * x * x * p.Density(x), r[i], r[i + 1], 1e-14).Value;
+            worst = Math.Max(worst, Math.Abs(p.EnclosedMass(r[i + 1]) / sum - 1));
+        }
+        Assert.True(worst < 1e-12, $"last row {last}: worst relative M error {worst}");
+        Assert.Equal(last, p.Density(6.6), last * 1e-9);
+    }
+
     [Fact]
     public void DensityStep_RepeatedRadius_IsRightContinuousAndMassExact()
     {
