@@ -207,7 +207,7 @@ public sealed class ShellLayout
                 long fillEnd = end - 12L * last * last;
                 // Beyond the segment: the next segment's first (flank) shell, or the surface.
                 double nextPoint = k == ends.Count - 1 ? double.NaN
-                    : k < steps && outer[k] > 0 ? RadiusAt(end + 6.0 * outer[k] * outer[k]) : double.PositiveInfinity;
+                    : k < steps && outer[k] > 0 ? RadiusAt(end + 6.0 * outer[k] * outer[k]) : FirstGreedyPoint(end, ends[k + 1].End);
                 var fill = BestFill(enclosed, fillEnd, segment, last, previous, nextPoint);
                 segment.AddRange(fill);
                 if (last > 0) segment.Add(last);
@@ -216,6 +216,19 @@ public sealed class ShellLayout
                 previous = Chain(end - SumPoints(segment), segment, previous, null, null);
             }
             return Assemble(c, sides, [.. ends.Take(steps).Select(e => e.Step)]);
+        }
+
+        /// <summary>
+        /// Points' radius of the first greedy shell of the segment [<paramref name="from"/>, <paramref name="to"/>): where
+        /// a step has no flanks the last shell below it faces that shell, not the step (+∞ when no shell of the target
+        /// aspect fits, read as a face on the step).
+        /// </summary>
+        private double FirstGreedyPoint(long from, long to)
+        {
+            long q = (to - from) / 12;
+            if (q < 1) return double.PositiveInfinity;
+            var (n, capped) = BestNSide(from, RadiusAt(from), q);
+            return capped ? double.PositiveInfinity : RadiusAt(from + 6.0 * n * n);
         }
 
         /// <summary>
@@ -602,7 +615,26 @@ public sealed class ShellLayout
                 long points = 12L * shells[i] * shells[i];
                 double upper;
                 if (i + 1 < k) upper = lower[i + 1];
-                else if (double.IsNaN(nextPoint)) break;
+                else if (double.IsNaN(nextPoint))
+                {
+                    // The surface shell holds the mass up to R by construction, but where the density above its points
+                    // falls by more than SurfaceContrast before R (a layer too light for a shell of its own, merged into
+                    // this segment) its cells swell into that layer: scored in volume form, ρ(p) ΔV / (N m), so the
+                    // closing spreads the swelling over more cells. Smooth surfaces (ρ(p) / mean above p ≈ 2.4 for a
+                    // (R − r)³ surface) are left out as before.
+                    double big = profile.OuterRadius, rp = p[i];
+                    double above = profile.TotalMass - profile.EnclosedMass(rp);
+                    double meanAbove = above / (4.0 / 3.0 * Math.PI * (big * big * big - rp * rp * rp));
+                    if (profile.Density(rp) > SurfaceContrast * meanAbove)
+                    {
+                        double rLow = profile.RadiusOfEnclosedMass(Math.Min(lower[i], profile.TotalMass));
+                        double volume = 4.0 / 3.0 * Math.PI * (big * big * big - rLow * rLow * rLow);
+                        double ev = Math.Log(Math.Max(profile.Density(rp) * volume, 1e-300) / (points * _m));
+                        sum += ev * ev;
+                        counted++;
+                    }
+                    break;
+                }
                 else upper = profile.EnclosedMass(double.IsPositiveInfinity(nextPoint) ? RadiusAt(end) : 0.5 * (p[i] + nextPoint));
                 double e = LogMassRatio(upper, lower[i], points);
                 sum += e * e;
@@ -610,6 +642,10 @@ public sealed class ShellLayout
             }
             return Math.Sqrt(sum / Math.Max(counted, 1));
         }
+
+        // Density at the surface shell's points over the mean density above them beyond which its cells are scored by
+        // volume (see PredictedRms): well above the ≈ 2.4 of a polytrope-like surface, far below a merged light layer's 100+.
+        private const double SurfaceContrast = 10.0;
 
         // Aspects within this factor of the target cost nothing in the closing's score.
         private const double AspectBand = 1.5;
