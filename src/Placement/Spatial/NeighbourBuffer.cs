@@ -78,10 +78,26 @@ public sealed class NeighbourBuffer
     internal void AppendRange(double[] xs, double[] ys, double[] zs, int from, int to, double ox, double oy, double oz, double inner2, double outer2, int skip)
     {
         if (from >= to) return;
-        int need = Count + (to - from);
-        while (need > _slot.Length) Grow();
-        if ((uint)to > (uint)xs.Length || (uint)to > (uint)ys.Length || (uint)to > (uint)zs.Length || from < 0)
-            throw new InvalidOperationException("Slot range out of bounds.");
+        Span<int> run = [from, to];
+        AppendRuns(xs, ys, zs, run, 1, ox, oy, oz, inner2, outer2, skip);
+    }
+
+    /// <summary>
+    /// <see cref="AppendRange"/> over several slot runs ([runs[2k], runs[2k + 1]) for k &lt; <paramref name="count"/>),
+    /// with one capacity check for all of them.
+    /// </summary>
+    internal void AppendRuns(double[] xs, double[] ys, double[] zs, ReadOnlySpan<int> runs, int count, double ox, double oy, double oz,
+        double inner2, double outer2, int skip)
+    {
+        int total = 0;
+        for (int k = 0; k < count; k++)
+        {
+            int from = runs[2 * k], to = runs[2 * k + 1];
+            if (from < 0 || from > to || (uint)to > (uint)xs.Length || (uint)to > (uint)ys.Length || (uint)to > (uint)zs.Length)
+                throw new InvalidOperationException("Slot range out of bounds.");
+            total += to - from;
+        }
+        while (Count + total > _slot.Length) Grow();
         ref double px = ref MemoryMarshal.GetArrayDataReference(xs);
         ref double py = ref MemoryMarshal.GetArrayDataReference(ys);
         ref double pz = ref MemoryMarshal.GetArrayDataReference(zs);
@@ -91,14 +107,17 @@ public sealed class NeighbourBuffer
         ref double dys = ref MemoryMarshal.GetArrayDataReference(_dy);
         ref double dzs = ref MemoryMarshal.GetArrayDataReference(_dz);
         int c = Count;
-        for (int s = from; s < to; s++)
+        for (int k = 0; k < count; k++)
         {
-            double dx = Unsafe.Add(ref px, s) + ox, dy = Unsafe.Add(ref py, s) + oy, dz = Unsafe.Add(ref pz, s) + oz;
-            double d2 = dx * dx + dy * dy + dz * dz;
-            // Write unconditionally, advance only when inside the shell: no unpredictable branch.
-            Unsafe.Add(ref slot, c) = s; Unsafe.Add(ref d2s, c) = d2;
-            Unsafe.Add(ref dxs, c) = dx; Unsafe.Add(ref dys, c) = dy; Unsafe.Add(ref dzs, c) = dz;
-            c += (d2 < outer2 ? 1 : 0) & (d2 >= inner2 ? 1 : 0) & (s != skip ? 1 : 0);
+            int to = runs[2 * k + 1];
+            for (int s = runs[2 * k]; s < to; s++)
+            {
+                double dx = Unsafe.Add(ref px, s) + ox, dy = Unsafe.Add(ref py, s) + oy, dz = Unsafe.Add(ref pz, s) + oz;
+                double d2 = dx * dx + dy * dy + dz * dz;
+                Unsafe.Add(ref slot, c) = s; Unsafe.Add(ref d2s, c) = d2;
+                Unsafe.Add(ref dxs, c) = dx; Unsafe.Add(ref dys, c) = dy; Unsafe.Add(ref dzs, c) = dz;
+                c += (d2 < outer2 ? 1 : 0) & (d2 >= inner2 ? 1 : 0) & (s != skip ? 1 : 0);
+            }
         }
         Count = c;
     }

@@ -118,7 +118,7 @@ internal sealed class CellBuilder
         _cellDuplicate2 = Math.Min(_duplicate2, _duplicateFraction2 * (gx * gx + gy * gy + gz * gz));
         ClipByShells(slot, self, gx, gy, gz);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
-        cell.GroupFaceCorners();
+        cell.BuildFaceRings();
         Measure(self, gx, gy, gz, faces);
     }
 
@@ -237,7 +237,7 @@ internal sealed class CellBuilder
         // The next cell starts from this one's security radius (neighbours in space, so of similar size), at most
         // FarShellFactor times this one's start, and not at all from a cell that reached far: its radius would sweep the
         // dense region around the next cell.
-        if (!wentFar) _lastSecurity = Math.Min(2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
+        if (!wentFar) _lastSecurity = Math.Min(1.1 * 2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
     }
 
     // A grid cell holding more than this many points (the grid sizes cells for about 1.5) marks a region far denser than
@@ -389,6 +389,8 @@ internal sealed class CellBuilder
         throw new InvalidOperationException("Sphere clipping did not converge; raise SphereTolerance.");
     }
 
+    private const double OneThird = 1.0 / 3.0;
+
     private void Measure(int self, double gx, double gy, double gz, FaceBuffer? faces)
     {
         var cell = _cell;
@@ -402,14 +404,14 @@ internal sealed class CellBuilder
         var start = cell.RingStart; var ring = cell.Ring;
         var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
         double volume = 0, mx = 0, my = 0, mz = 0;
-        // Each face is ordered (OrderFace) and measured in the same pass; afterwards every ring is in place for the
-        // mass quadrature.
+        // Locals, so the stores below do not make the JIT reload the fields.
+        var faceArea = _faceArea; var faceH = _faceH; var faceCx = _faceCx; var faceCy = _faceCy; var faceCz = _faceCz;
+        // Rings ordered by BuildFaceRings (in Build), also for the mass quadrature.
         for (int p = 0; p < planes; p++)
         {
             int s = start[p], e = start[p + 1];
-            _faceArea[p] = 0;
+            faceArea[p] = 0;
             if (e - s < 3) continue;
-            cell.OrderFace(p);
             double norm = Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
             double inv = 1.0 / norm;
             double ux = nx[p] * inv, uy = ny[p] * inv, uz = nz[p] * inv;
@@ -429,16 +431,18 @@ internal sealed class CellBuilder
                 cz += a2 * (vz[t1] + vz[t2]);
             }
             if (area == 0) continue;
-            // Face centroid = a + Σ a_k (b_k + c_k − 2a)/(3 Σ a_k) with b, c absolute: fold the a terms in.
-            double fcx = (cx / area + ax) / 3.0, fcy = (cy / area + ay) / 3.0, fcz = (cz / area + az) / 3.0;
+            // Face centroid = a + Σ a_k (b_k + c_k − 2a)/(3 Σ a_k) with b, c absolute: fold the a terms in. One division
+            // per face.
+            double perArea = 1.0 / area;
+            double fcx = (cx * perArea + ax) * OneThird, fcy = (cy * perArea + ay) * OneThird, fcz = (cz * perArea + az) * OneThird;
             area = 0.5 * Math.Abs(area);
             double h = dd[p] * inv;
-            double vf = area * h / 3.0;
+            double vf = area * h * OneThird;
             volume += vf;
             mx += vf * fcx; my += vf * fcy; mz += vf * fcz;
-            _faceArea[p] = area;
-            _faceH[p] = dd[p] / norm;
-            _faceCx[p] = fcx; _faceCy[p] = fcy; _faceCz[p] = fcz;
+            faceArea[p] = area;
+            faceH[p] = h;
+            faceCx[p] = fcx; faceCy[p] = fcy; faceCz[p] = fcz;
         }
         // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
         double cxr = 0.75 * mx / volume, cyr = 0.75 * my / volume, czr = 0.75 * mz / volume;
@@ -449,14 +453,14 @@ internal sealed class CellBuilder
         var neighbour = cell.Neighbour;
         for (int p = 0; p < planes; p++)
         {
-            double area = _faceArea[p];
+            double area = faceArea[p];
             if (!(area > minArea)) continue;
             faceCount++;
             int code = neighbour[p];
             if (code < 0) cut = true;
             else
             {
-                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / _faceH[p]);
+                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / faceH[p]);
             }
             faces?.Add(code, area);
         }

@@ -301,22 +301,38 @@ internal sealed class ConvexCell
         double reach = Math.Sqrt(MaxRadiusSquared) * (1 + 1e-9) + OvershootTolerances * slack, reach2 = reach * reach;
         if (_newX.Length < boundary) GrowNewVertices(boundary);
         int steps = 0, x = first;
+        // Hot loop: arrays read through references (every index is a plane of this cell, below the scratch capacity
+        // ensured above), so the JIT neither re-reads the fields after each store nor checks bounds.
+        ref int next = ref MemoryMarshal.GetArrayDataReference(_next);
+        ref int nextStamp = ref MemoryMarshal.GetArrayDataReference(_nextStamp);
+        ref double pnx = ref MemoryMarshal.GetArrayDataReference(_nx);
+        ref double pny = ref MemoryMarshal.GetArrayDataReference(_ny);
+        ref double pnz = ref MemoryMarshal.GetArrayDataReference(_nz);
+        ref double pd = ref MemoryMarshal.GetArrayDataReference(_d);
+        ref double pn2 = ref MemoryMarshal.GetArrayDataReference(_n2);
+        ref double newX = ref MemoryMarshal.GetArrayDataReference(_newX);
+        ref double newY = ref MemoryMarshal.GetArrayDataReference(_newY);
+        ref double newZ = ref MemoryMarshal.GetArrayDataReference(_newZ);
+        ref double newR2 = ref MemoryMarshal.GetArrayDataReference(_newR2);
         do
         {
-            if (_nextStamp[x] != stamp || steps == boundary) return false;
-            int y = _next[x];
-            double det = Meet(_nx[x], _ny[x], _nz[x], _d[x], _nx[y], _ny[y], _nz[y], _d[y], nx, ny, nz, d, out double vx, out double vy, out double vz);
-            if (!double.IsFinite(1.0 / det)) return false;
-            if (det * det < IllConditioned * _n2[x] * _n2[y] * n2)
+            if (Unsafe.Add(ref nextStamp, x) != stamp || steps == boundary) return false;
+            int y = Unsafe.Add(ref next, x);
+            double xnx = Unsafe.Add(ref pnx, x), xny = Unsafe.Add(ref pny, x), xnz = Unsafe.Add(ref pnz, x), xd = Unsafe.Add(ref pd, x);
+            double ynx = Unsafe.Add(ref pnx, y), yny = Unsafe.Add(ref pny, y), ynz = Unsafe.Add(ref pnz, y), yd = Unsafe.Add(ref pd, y);
+            double det = Meet(xnx, xny, xnz, xd, ynx, yny, ynz, yd, nx, ny, nz, d, out double vx, out double vy, out double vz);
+            // A zero determinant gives a vertex that is not finite, refused below (q2 <= reach2 is false for NaN and ∞).
+            if (det * det < IllConditioned * Unsafe.Add(ref pn2, x) * Unsafe.Add(ref pn2, y) * n2)
             {
                 // Nearly dependent planes: Cramer's rule in double-double arithmetic, so the vertex is accurate to rounding
                 // for any determinant the doubles can resolve (in double it is off by about 1e-16 |v| / relative det).
-                MeetExtended(_nx[x], _ny[x], _nz[x], _d[x], _nx[y], _ny[y], _nz[y], _d[y], nx, ny, nz, d, out vx, out vy, out vz);
+                if (!(det != 0)) return false;
+                MeetExtended(xnx, xny, xnz, xd, ynx, yny, ynz, yd, nx, ny, nz, d, out vx, out vy, out vz);
                 if (!VertexOnPlanes(x, y, nx, ny, nz, d, vx, vy, vz)) return false;
             }
             double q2 = vx * vx + vy * vy + vz * vz;
             if (!(q2 <= reach2)) return false;
-            _newX[steps] = vx; _newY[steps] = vy; _newZ[steps] = vz; _newR2[steps] = q2;
+            Unsafe.Add(ref newX, steps) = vx; Unsafe.Add(ref newY, steps) = vy; Unsafe.Add(ref newZ, steps) = vz; Unsafe.Add(ref newR2, steps) = q2;
             x = y;
             steps++;
         } while (x != first && steps <= boundary);
@@ -327,22 +343,29 @@ internal sealed class ConvexCell
         // a new vertex, and the full rescan below is skipped.
         double oldMax = MaxRadiusSquared, newMax = 0;
         bool farthestRemoved = _farthestRemoved;
-        // Fill removed slots with the new triangles (x, next[x], p), append the rest.
+        // Fill removed slots with the new triangles (x, next[x], p), append the rest (capacity ensured first, so the
+        // references below stay valid).
+        while (_triCount + boundary > _ta.Length) GrowTriangles();
+        ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
+        ref int tb = ref MemoryMarshal.GetArrayDataReference(_tb);
+        ref int tc = ref MemoryMarshal.GetArrayDataReference(_tc);
+        ref double pvx = ref MemoryMarshal.GetArrayDataReference(_vx);
+        ref double pvy = ref MemoryMarshal.GetArrayDataReference(_vy);
+        ref double pvz = ref MemoryMarshal.GetArrayDataReference(_vz);
+        ref double pvr2 = ref MemoryMarshal.GetArrayDataReference(_vr2);
         int slot = 0; // word cursor into _removed
         x = first;
         for (int k = 0; k < boundary; k++)
         {
-            int y = _next[x];
+            int y = Unsafe.Add(ref next, x);
             int t = NextRemoved(ref slot);
             if (t >= 0) _removed[t >> 6] &= ~(1UL << (t & 63));
-            else
-            {
-                if (_triCount == _ta.Length) GrowTriangles();
-                t = _triCount++;
-            }
-            _ta[t] = x; _tb[t] = y; _tc[t] = p;
-            _vx[t] = _newX[k]; _vy[t] = _newY[k]; _vz[t] = _newZ[k]; _vr2[t] = _newR2[k];
-            newMax = Math.Max(newMax, _newR2[k]);
+            else t = _triCount++;
+            Unsafe.Add(ref ta, t) = x; Unsafe.Add(ref tb, t) = y; Unsafe.Add(ref tc, t) = p;
+            double r2 = Unsafe.Add(ref newR2, k);
+            Unsafe.Add(ref pvx, t) = Unsafe.Add(ref newX, k); Unsafe.Add(ref pvy, t) = Unsafe.Add(ref newY, k); Unsafe.Add(ref pvz, t) = Unsafe.Add(ref newZ, k);
+            Unsafe.Add(ref pvr2, t) = r2;
+            newMax = Math.Max(newMax, r2);
             x = y;
         }
         // Remaining removed slots (the patch had interior vertices): compact, keeping order.
@@ -372,30 +395,39 @@ internal sealed class ConvexCell
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool BoundaryByMasks(int stamp, ref int boundary, ref int first)
     {
-        var outMask = _outMask; var inMask = _inMask;
+        // Plane indices are below 64 here (the masks' width), within every array read below.
+        ref ulong outMask = ref MemoryMarshal.GetArrayDataReference(_outMask);
+        ref ulong inMask = ref MemoryMarshal.GetArrayDataReference(_inMask);
+        ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
+        ref int tb = ref MemoryMarshal.GetArrayDataReference(_tb);
+        ref int tc = ref MemoryMarshal.GetArrayDataReference(_tc);
+        var removed = _removed;
         ulong touched = 0;
         int words = (_triCount + 63) >> 6;
         for (int w = 0; w < words; w++)
-        for (ulong bits = _removed[w]; bits != 0; bits &= bits - 1)
+        for (ulong bits = removed[w]; bits != 0; bits &= bits - 1)
         {
             int t = (w << 6) + BitOperations.TrailingZeroCount(bits);
-            int a = _ta[t], b = _tb[t], c = _tc[t];
-            outMask[a] |= 1UL << b; inMask[a] |= 1UL << c;
-            outMask[b] |= 1UL << c; inMask[b] |= 1UL << a;
-            outMask[c] |= 1UL << a; inMask[c] |= 1UL << b;
-            touched |= (1UL << a) | (1UL << b) | (1UL << c);
+            int a = Unsafe.Add(ref ta, t), b = Unsafe.Add(ref tb, t), c = Unsafe.Add(ref tc, t);
+            ulong ma = 1UL << a, mb = 1UL << b, mc = 1UL << c;
+            Unsafe.Add(ref outMask, a) |= mb; Unsafe.Add(ref inMask, a) |= mc;
+            Unsafe.Add(ref outMask, b) |= mc; Unsafe.Add(ref inMask, b) |= ma;
+            Unsafe.Add(ref outMask, c) |= ma; Unsafe.Add(ref inMask, c) |= mb;
+            touched |= ma | mb | mc;
         }
+        ref int next = ref MemoryMarshal.GetArrayDataReference(_next);
+        ref int nextStamp = ref MemoryMarshal.GetArrayDataReference(_nextStamp);
         bool ok = true;
         while (touched != 0)
         {
             int x = BitOperations.TrailingZeroCount(touched);
             touched &= touched - 1;
-            ulong leaving = outMask[x] & ~inMask[x];
-            outMask[x] = 0; inMask[x] = 0;
+            ulong leaving = Unsafe.Add(ref outMask, x) & ~Unsafe.Add(ref inMask, x);
+            Unsafe.Add(ref outMask, x) = 0; Unsafe.Add(ref inMask, x) = 0;
             if (leaving == 0) continue;
             if ((leaving & (leaving - 1)) != 0) { ok = false; continue; } // two boundary edges leave x: not a disc
-            _nextStamp[x] = stamp;
-            _next[x] = BitOperations.TrailingZeroCount(leaving);
+            Unsafe.Add(ref nextStamp, x) = stamp;
+            Unsafe.Add(ref next, x) = BitOperations.TrailingZeroCount(leaving);
             boundary++;
             first = x;
         }
@@ -535,6 +567,73 @@ internal sealed class ConvexCell
     public ReadOnlySpan<int> RingStart => _ringStart.AsSpan(0, _planeCount + 1);
 
     public ReadOnlySpan<int> Ring => _ring.AsSpan(0, 3 * _triCount);
+
+    // Triangle holding each directed edge x→y (key 64x + y) of the dual triangulation, for cells of at most 64 planes.
+    private readonly int[] _edgeTriangle = new int[64 * 64];
+    private int[] _firstTriangle = new int[64];
+
+    /// <summary>
+    /// Builds every face ring in order: <c>Ring[RingStart[p] .. RingStart[p + 1])</c> lists the triangles (vertices) around
+    /// face p, in the order <see cref="OrderFace"/> gives, starting from the lowest-numbered triangle; faces that vanished
+    /// have an empty ring.
+    /// </summary>
+    /// <remarks>
+    /// In triangle (p, q, r) face p runs from neighbour q to neighbour r, so the next triangle around p is the one holding the
+    /// directed edge p→r. With at most 64 planes those triangles are looked up in a 64 × 64 table filled from every
+    /// triangle's three directed edges (each edge of a closed triangulation occurs once, so no entry is read stale);
+    /// otherwise the corners are grouped by plane and each face ordered (<see cref="GroupFaceCorners"/>,
+    /// <see cref="OrderFace"/>). The table takes a third of the time of grouping and ordering (1e6 uniform points).
+    /// </remarks>
+    /// <exception cref="InvalidOperationException">A ring does not close (an inconsistent triangulation).</exception>
+    public void BuildFaceRings()
+    {
+        int planes = _planeCount, tris = _triCount;
+        if (planes > 64)
+        {
+            GroupFaceCorners();
+            for (int p = 0; p < planes; p++) OrderFace(p);
+            return;
+        }
+        if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
+        if (_ring.Length < 3 * tris)
+        {
+            int n = Math.Max(3 * tris, 2 * _ring.Length);
+            Array.Resize(ref _ring, n); Array.Resize(ref _entQ, n); Array.Resize(ref _entR, n);
+        }
+        ref int edge = ref MemoryMarshal.GetArrayDataReference(_edgeTriangle);
+        ref int firstTri = ref MemoryMarshal.GetArrayDataReference(_firstTriangle);
+        ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
+        ref int tb = ref MemoryMarshal.GetArrayDataReference(_tb);
+        ref int tc = ref MemoryMarshal.GetArrayDataReference(_tc);
+        for (int p = 0; p < planes; p++) Unsafe.Add(ref firstTri, p) = -1;
+        // Backwards, so each plane's first triangle is its lowest-numbered one.
+        for (int t = tris - 1; t >= 0; t--)
+        {
+            int a = Unsafe.Add(ref ta, t), b = Unsafe.Add(ref tb, t), c = Unsafe.Add(ref tc, t);
+            Unsafe.Add(ref edge, (a << 6) | b) = t;
+            Unsafe.Add(ref edge, (b << 6) | c) = t;
+            Unsafe.Add(ref edge, (c << 6) | a) = t;
+            Unsafe.Add(ref firstTri, a) = t; Unsafe.Add(ref firstTri, b) = t; Unsafe.Add(ref firstTri, c) = t;
+        }
+        var start = _ringStart; var ring = _ring;
+        int k = 0;
+        for (int p = 0; p < planes; p++)
+        {
+            start[p] = k;
+            int t0 = Unsafe.Add(ref firstTri, p);
+            if (t0 < 0) continue;
+            int t = t0, limit = k + tris;
+            do
+            {
+                if (k == limit) throw new InvalidOperationException("A face ring of a Voronoi cell does not close (inconsistent triangulation).");
+                ring[k++] = t;
+                int a = Unsafe.Add(ref ta, t), b = Unsafe.Add(ref tb, t), c = Unsafe.Add(ref tc, t);
+                int r = a == p ? c : b == p ? a : b;
+                t = Unsafe.Add(ref edge, (p << 6) | r);
+            } while (t != t0);
+        }
+        start[planes] = k;
+    }
 
     /// <summary>
     /// Groups the triangle corners by plane: the first half of building the face rings. Each face's ring is in place
