@@ -308,7 +308,8 @@ internal sealed class ConvexCell
         // whose end counted as kept within tolerance — the bisectors of a compact cluster seen from far away are nearly
         // parallel — and would make the cell non-convex. Refused like a broken cycle.
         double n2 = nx * nx + ny * ny + nz * nz;
-        double reach = Math.Sqrt(MaxRadiusSquared) * (1 + 1e-9) + OvershootTolerances * slack, reach2 = reach * reach;
+        // reach² is at least this (no square root): most new vertices are checked against it alone.
+        double surely2 = MaxRadiusSquared * ((1 + 1e-9) * (1 + 1e-9));
         if (_newX.Length < boundary) GrowNewVertices(boundary);
         int steps = 0, x = first;
         // Hot loop: arrays read through references (every index is a plane of this cell, below the scratch capacity
@@ -324,13 +325,27 @@ internal sealed class ConvexCell
         ref double newY = ref MemoryMarshal.GetArrayDataReference(_newY);
         ref double newZ = ref MemoryMarshal.GetArrayDataReference(_newZ);
         ref double newR2 = ref MemoryMarshal.GetArrayDataReference(_newR2);
+        // Cramer's rule for planes x, y = next[x] and the new one c: v = (d_x (n_y × n_c) + d_y (n_c × n_x) + d_c (n_x × n_y)) /
+        // (n_x · (n_y × n_c)), written out (a method with out parameters kept the vertex in memory). Along the cycle
+        // n_c × n_x of the next step is −(n_y × n_c) of this one, exactly (the same products, negated).
+        double cax, cay, caz;
+        {
+            double fx = Unsafe.Add(ref pnx, x), fy = Unsafe.Add(ref pny, x), fz = Unsafe.Add(ref pnz, x);
+            cax = ny * fz - nz * fy; cay = nz * fx - nx * fz; caz = nx * fy - ny * fx;
+        }
         do
         {
             if (Unsafe.Add(ref nextStamp, x) != stamp || steps == boundary) return false;
             int y = Unsafe.Add(ref next, x);
             double xnx = Unsafe.Add(ref pnx, x), xny = Unsafe.Add(ref pny, x), xnz = Unsafe.Add(ref pnz, x), xd = Unsafe.Add(ref pd, x);
             double ynx = Unsafe.Add(ref pnx, y), yny = Unsafe.Add(ref pny, y), ynz = Unsafe.Add(ref pnz, y), yd = Unsafe.Add(ref pd, y);
-            double det = Meet(xnx, xny, xnz, xd, ynx, yny, ynz, yd, nx, ny, nz, d, out double vx, out double vy, out double vz);
+            double bcx = yny * nz - ynz * ny, bcy = ynz * nx - ynx * nz, bcz = ynx * ny - yny * nx;
+            double abx = xny * ynz - xnz * yny, aby = xnz * ynx - xnx * ynz, abz = xnx * yny - xny * ynx;
+            double det = xnx * bcx + xny * bcy + xnz * bcz, inv = 1.0 / det;
+            double vx = (xd * bcx + yd * cax + d * abx) * inv;
+            double vy = (xd * bcy + yd * cay + d * aby) * inv;
+            double vz = (xd * bcz + yd * caz + d * abz) * inv;
+            cax = -bcx; cay = -bcy; caz = -bcz;
             // A zero determinant gives a vertex that is not finite, refused below (q2 <= reach2 is false for NaN and ∞).
             if (det * det < IllConditioned * Unsafe.Add(ref pn2, x) * Unsafe.Add(ref pn2, y) * n2)
             {
@@ -341,7 +356,11 @@ internal sealed class ConvexCell
                 if (!VertexOnPlanes(x, y, nx, ny, nz, d, vx, vy, vz)) return false;
             }
             double q2 = vx * vx + vy * vy + vz * vz;
-            if (!(q2 <= reach2)) return false;
+            if (!(q2 <= surely2))
+            {
+                double reach = Math.Sqrt(MaxRadiusSquared) * (1 + 1e-9) + OvershootTolerances * slack;
+                if (!(q2 <= reach * reach)) return false;
+            }
             Unsafe.Add(ref newX, steps) = vx; Unsafe.Add(ref newY, steps) = vy; Unsafe.Add(ref newZ, steps) = vz; Unsafe.Add(ref newR2, steps) = q2;
             x = y;
             steps++;
@@ -501,26 +520,10 @@ internal sealed class ConvexCell
             && rc * rc <= 3 * ((cx * cx + cy * cy + cz * cz) * base2 + e2 * dc * dc);
     }
 
-    // The point where planes n_a·x = d_a, n_b·x = d_b and n_c·x = d_c meet:
-    // x = (d_a (n_b × n_c) + d_b (n_c × n_a) + d_c (n_a × n_b)) / (n_a · (n_b × n_c)). Returns the determinant
-    // n_a · (n_b × n_c); the vertex is not finite when it is zero.
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static double Meet(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
-        double cx, double cy, double cz, double dc, out double vx, out double vy, out double vz)
-    {
-        double bcx = by * cz - bz * cy, bcy = bz * cx - bx * cz, bcz = bx * cy - by * cx;
-        double cax = cy * az - cz * ay, cay = cz * ax - cx * az, caz = cx * ay - cy * ax;
-        double abx = ay * bz - az * by, aby = az * bx - ax * bz, abz = ax * by - ay * bx;
-        double det = ax * bcx + ay * bcy + az * bcz, inv = 1.0 / det;
-        vx = (da * bcx + db * cax + dc * abx) * inv;
-        vy = (da * bcy + db * cay + dc * aby) * inv;
-        vz = (da * bcz + db * caz + dc * abz) * inv;
-        return det;
-    }
-
-    // Meet in double-double arithmetic (each value an unevaluated sum hi + lo; products split exactly with a fused
-    // multiply-add, sums with Knuth's two-sum): the cross products and the determinant carry about 106 bits, and each
-    // coordinate is rounded to double once at the end.
+    // The point where planes n_a·x = d_a, n_b·x = d_b and n_c·x = d_c meet, x = (d_a (n_b × n_c) + d_b (n_c × n_a) +
+    // d_c (n_a × n_b)) / (n_a · (n_b × n_c)), in double-double arithmetic (each value an unevaluated sum hi + lo; products
+    // split exactly with a fused multiply-add, sums with Knuth's two-sum): the cross products and the determinant carry
+    // about 106 bits, and each coordinate is rounded to double once at the end.
     private static void MeetExtended(double ax, double ay, double az, double da, double bx, double by, double bz, double db,
         double cx, double cy, double cz, double dc, out double vx, out double vy, out double vz)
     {
