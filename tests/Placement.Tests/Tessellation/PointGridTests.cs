@@ -60,4 +60,55 @@ public class PointGridTests
             Assert.Equal(bruteShell, buffer.Count);
         }
     }
+
+    [Fact]
+    public void CollectInShell_VectorAndScalarAppends_GiveTheBruteForceNeighboursInOneOrder()
+    {
+        // Every point of a 2000-point set queried (the last grid cells end at the arrays' end, where the vector path
+        // falls back to scalar), shells of growing radii with the query itself excluded: each path must return exactly
+        // the brute-force neighbours (offsets and squared distances bit for bit, computed in the same order), and the
+        // vector path the scalar path's order.
+        var (x, y, z) = TestPoints.Uniform(2000, 71, -1, 1);
+        var grid = new PointGrid(x, y, z, (-1, -1, -1), (1, 1, 1), false);
+        var sx = grid.SortedX; var sy = grid.SortedY; var sz = grid.SortedZ;
+        var scalar = new NeighbourBuffer();
+        var packed = new NeighbourBuffer();
+        bool was = NeighbourBuffer.PackedAppend;
+        try
+        {
+            for (int q = 0; q < x.Length; q++)
+            {
+                double inner2 = q % 3 == 0 ? 0 : 0.002 * (q % 7), outer2 = inner2 + 0.01 + 0.0001 * (q % 50);
+                double qx = sx[q], qy = sy[q], qz = sz[q];
+                NeighbourBuffer.PackedAppend = false;
+                scalar.Clear();
+                grid.CollectInShell(qx, qy, qz, inner2, outer2, q, scalar);
+                NeighbourBuffer.PackedAppend = System.Runtime.Intrinsics.X86.Avx2.IsSupported;
+                packed.Clear();
+                grid.CollectInShell(qx, qy, qz, inner2, outer2, q, packed);
+
+                var expected = new Dictionary<int, (double D2, double Dx, double Dy, double Dz)>();
+                for (int s = 0; s < x.Length; s++)
+                {
+                    double dx = sx[s] + -qx, dy = sy[s] + -qy, dz = sz[s] + -qz, d2 = dx * dx + dy * dy + dz * dz;
+                    if (s != q && d2 >= inner2 && d2 < outer2) expected[s] = (d2, dx, dy, dz);
+                }
+                Assert.Equal(expected.Count, scalar.Count);
+                for (int k = 0; k < scalar.Count; k++)
+                {
+                    Assert.True(expected.TryGetValue(scalar.Slot[k], out var e), $"query {q}: slot {scalar.Slot[k]} is not in the shell");
+                    Assert.Equal(e, (scalar.DistanceSquared[k], scalar.Dx[k], scalar.Dy[k], scalar.Dz[k]));
+                }
+                Assert.Equal(scalar.Slot.ToArray(), packed.Slot.ToArray());
+                Assert.Equal(scalar.DistanceSquared.ToArray(), packed.DistanceSquared.ToArray());
+                Assert.Equal(scalar.Dx.ToArray(), packed.Dx.ToArray());
+                Assert.Equal(scalar.Dy.ToArray(), packed.Dy.ToArray());
+                Assert.Equal(scalar.Dz.ToArray(), packed.Dz.ToArray());
+            }
+        }
+        finally
+        {
+            NeighbourBuffer.PackedAppend = was;
+        }
+    }
 }
