@@ -352,8 +352,10 @@ internal sealed class ConvexCell
                 // Nearly dependent planes: Cramer's rule in double-double arithmetic, so the vertex is accurate to rounding
                 // for any determinant the doubles can resolve (in double it is off by about 1e-16 |v| / relative det).
                 if (!(det != 0)) return false;
-                MeetExtended(xnx, xny, xnz, xd, ynx, yny, ynz, yd, nx, ny, nz, d, out vx, out vy, out vz);
-                if (!VertexOnPlanes(x, y, nx, ny, nz, d, vx, vy, vz)) return false;
+                // Through separate locals: passing vx, vy, vz by reference would keep them in memory on the common path.
+                MeetExtended(xnx, xny, xnz, xd, ynx, yny, ynz, yd, nx, ny, nz, d, out double ex, out double ey, out double ez);
+                if (!VertexOnPlanes(x, y, nx, ny, nz, d, ex, ey, ez)) return false;
+                vx = ex; vy = ey; vz = ez;
             }
             double q2 = vx * vx + vy * vy + vz * vz;
             if (!(q2 <= surely2))
