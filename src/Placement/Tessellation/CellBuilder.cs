@@ -41,7 +41,7 @@ internal sealed class CellBuilder
     // This cell's duplicate distance², see Build.
     private double _cellDuplicate2;
     private readonly int[] _selfCodes = new int[6];
-    private double[] _faceArea = new double[64], _faceH = new double[64], _faceCx = new double[64], _faceCy = new double[64], _faceCz = new double[64];
+    private double[] _faceArea = new double[64], _faceH = new double[64];
 
     /// <summary>
     /// A builder over a uniform grid (<paramref name="tree"/> null) or over a k-d tree (<paramref name="grid"/> null). On the grid,
@@ -234,11 +234,16 @@ internal sealed class CellBuilder
             bool farNext = cellTree is null && _farTree is not null && fromGrid >= FirstNeighbours && 2.0 * outer > FarShellFactor * first;
             outer = tree is not null || farNext ? reach : Math.Min(reach, 2.0 * outer);
         }
-        // The next cell starts from this one's security radius (neighbours in space, so of similar size), at most
-        // FarShellFactor times this one's start, and not at all from a cell that reached far: its radius would sweep the
-        // dense region around the next cell.
-        if (!wentFar) _lastSecurity = Math.Min(1.1 * 2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
+        // The next cell starts from FirstShellFactor times this one's security radius (neighbours in space, so of similar
+        // size), at most FarShellFactor times this one's start, and not at all from a cell that reached far: its radius would
+        // sweep the dense region around the next cell.
+        if (!wentFar) _lastSecurity = Math.Min(FirstShellFactor * 2.0 * Math.Sqrt(cell.MaxRadiusSquared), FarShellFactor * first);
     }
+
+    // The next cell's first shell over this cell's security radius: a little beyond it, so fewer cells need a second
+    // shell (which re-scans the first one's rows). 3e5 uniform points, one thread: 1.1 about 3 % faster than 1.0; 0.9 and 1.2
+    // were worse or no better.
+    private const double FirstShellFactor = 1.1;
 
     // A grid cell holding more than this many points (the grid sizes cells for about 1.5) marks a region far denser than
     // the grid resolves (a cusp or a dense core): its cells gather from the far tree.
@@ -398,14 +403,14 @@ internal sealed class CellBuilder
         if (_faceArea.Length < planes)
         {
             int m = Math.Max(planes, 2 * _faceArea.Length);
-            _faceArea = new double[m]; _faceH = new double[m]; _faceCx = new double[m]; _faceCy = new double[m]; _faceCz = new double[m];
+            _faceArea = new double[m]; _faceH = new double[m];
         }
         var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var dd = cell.D;
         var start = cell.RingStart; var ring = cell.Ring;
         var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
         double volume = 0, mx = 0, my = 0, mz = 0;
         // Locals, so the stores below do not make the JIT reload the fields.
-        var faceArea = _faceArea; var faceH = _faceH; var faceCx = _faceCx; var faceCy = _faceCy; var faceCz = _faceCz;
+        var faceArea = _faceArea; var faceH = _faceH;
         // Rings ordered by BuildFaceRings (in Build), also for the mass quadrature.
         for (int p = 0; p < planes; p++)
         {
@@ -442,7 +447,6 @@ internal sealed class CellBuilder
             mx += vf * fcx; my += vf * fcy; mz += vf * fcz;
             faceArea[p] = area;
             faceH[p] = h;
-            faceCx[p] = fcx; faceCy[p] = fcy; faceCz[p] = fcz;
         }
         // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
         double cxr = 0.75 * mx / volume, cyr = 0.75 * my / volume, czr = 0.75 * mz / volume;

@@ -346,7 +346,7 @@ internal sealed class ConvexCell
             double vy = (xd * bcy + yd * cay + d * aby) * inv;
             double vz = (xd * bcz + yd * caz + d * abz) * inv;
             cax = -bcx; cay = -bcy; caz = -bcz;
-            // A zero determinant gives a vertex that is not finite, refused below (q2 <= reach2 is false for NaN and ∞).
+            // A zero determinant gives a vertex that is not finite, refused below (both distance tests are false for NaN and ∞).
             if (det * det < IllConditioned * Unsafe.Add(ref pn2, x) * Unsafe.Add(ref pn2, y) * n2)
             {
                 // Nearly dependent planes: Cramer's rule in double-double arithmetic, so the vertex is accurate to rounding
@@ -611,11 +611,8 @@ internal sealed class ConvexCell
             return;
         }
         if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
-        if (_ring.Length < 3 * tris)
-        {
-            int n = Math.Max(3 * tris, 2 * _ring.Length);
-            Array.Resize(ref _ring, n); Array.Resize(ref _entQ, n); Array.Resize(ref _entR, n);
-        }
+        int corners = 3 * tris;
+        if (_ring.Length < corners) Array.Resize(ref _ring, Math.Max(corners, 2 * _ring.Length));
         ref int edge = ref MemoryMarshal.GetArrayDataReference(_edgeTriangle);
         ref int firstQ = ref MemoryMarshal.GetArrayDataReference(_firstNeighbour);
         ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
@@ -638,10 +635,11 @@ internal sealed class ConvexCell
             start[p] = k;
             int q0 = Unsafe.Add(ref firstQ, p);
             if (q0 < 0) continue;
-            int q = q0, limit = k + tris, row = p << 6;
+            int q = q0, row = p << 6;
             do
             {
-                if (k == limit) throw new InvalidOperationException("A face ring of a Voronoi cell does not close (inconsistent triangulation).");
+                // The rings of a closed triangulation hold every corner once: more means a ring that does not close.
+                if (k == corners) throw new InvalidOperationException("A face ring of a Voronoi cell does not close (inconsistent triangulation).");
                 int entry = Unsafe.Add(ref edge, row | q);
                 ring[k++] = entry & 0xFFFF;
                 q = entry >> 16;
