@@ -100,9 +100,15 @@ public sealed class NeighbourBuffer
                 throw new InvalidOperationException("Slot range out of bounds.");
             total += to - from;
         }
-        // Four slots of slack: the vector path stores whole groups of four at the write position.
-        while (Count + total + 4 > _slot.Length) Grow();
-        if (PackedAppend)
+        // Eight slots of slack: the vector paths store whole groups of four or eight at the write position.
+        while (Count + total + 8 > _slot.Length) Grow();
+        int lanes = SimdLanes.Doubles;
+        if (lanes == 8 && Vector512.IsHardwareAccelerated && Avx512F.VL.IsSupported)
+        {
+            Count = AppendRunsCompressed(xs, ys, zs, runs, count, ox, oy, oz, inner2, outer2, skip);
+            return;
+        }
+        if (lanes >= 4 && Avx2.IsSupported)
         {
             Count = AppendRunsPacked(xs, ys, zs, runs, count, ox, oy, oz, inner2, outer2, skip);
             return;
@@ -216,8 +222,57 @@ public sealed class NeighbourBuffer
         return c;
     }
 
-    /// <summary>Whether <see cref="AppendRuns"/> takes the AVX2 path (where supported; tests switch it off to compare).</summary>
-    internal static bool PackedAppend { get; set; } = Avx2.IsSupported;
+    /// <summary>
+    /// <see cref="AppendRunsPacked"/> eight points at a time with AVX-512, the kept lanes left-packed by the hardware's
+    /// compress instruction (in registers, then one store per buffer). Results, order included, are the scalar loop's.
+    /// </summary>
+    private int AppendRunsCompressed(double[] xs, double[] ys, double[] zs, ReadOnlySpan<int> runs, int count, double ox, double oy, double oz,
+        double inner2, double outer2, int skip)
+    {
+        ref double px = ref MemoryMarshal.GetArrayDataReference(xs);
+        ref double py = ref MemoryMarshal.GetArrayDataReference(ys);
+        ref double pz = ref MemoryMarshal.GetArrayDataReference(zs);
+        ref int slot = ref MemoryMarshal.GetArrayDataReference(_slot);
+        ref double d2s = ref MemoryMarshal.GetArrayDataReference(_d2);
+        ref double dxs = ref MemoryMarshal.GetArrayDataReference(_dx);
+        ref double dys = ref MemoryMarshal.GetArrayDataReference(_dy);
+        ref double dzs = ref MemoryMarshal.GetArrayDataReference(_dz);
+        var vox = Vector512.Create(ox); var voy = Vector512.Create(oy); var voz = Vector512.Create(oz);
+        var vin = Vector512.Create(inner2); var vout = Vector512.Create(outer2);
+        var lanes = Vector512.Create(0L, 1, 2, 3, 4, 5, 6, 7);
+        var slotLanes = Vector256.Create(0, 1, 2, 3, 4, 5, 6, 7);
+        int length = Math.Min(xs.Length, Math.Min(ys.Length, zs.Length));
+        int c = Count;
+        for (int k = 0; k < count; k++)
+        {
+            int to = runs[2 * k + 1];
+            int s = runs[2 * k];
+            for (; s < to; s += 8)
+            {
+                if (s + 8 > length)
+                {
+                    // The arrays' last group: scalar.
+                    c = AppendScalar(xs, ys, zs, s, to, ox, oy, oz, inner2, outer2, skip, c);
+                    break;
+                }
+                var vx = Vector512.LoadUnsafe(ref px, (nuint)s) + vox;
+                var vy = Vector512.LoadUnsafe(ref py, (nuint)s) + voy;
+                var vz = Vector512.LoadUnsafe(ref pz, (nuint)s) + voz;
+                var d2v = vx * vx + vy * vy + vz * vz;
+                // Lanes inside the run and not the query itself.
+                var valid = Vector512.LessThan(lanes, Vector512.Create((long)(to - s))) & ~Vector512.Equals(lanes, Vector512.Create((long)skip - s));
+                var keep = Vector512.LessThan(d2v, vout) & Vector512.GreaterThanOrEqual(d2v, vin) & valid.AsDouble();
+                Avx512F.Compress(Vector512<double>.Zero, keep, d2v).StoreUnsafe(ref d2s, (nuint)c);
+                Avx512F.Compress(Vector512<double>.Zero, keep, vx).StoreUnsafe(ref dxs, (nuint)c);
+                Avx512F.Compress(Vector512<double>.Zero, keep, vy).StoreUnsafe(ref dys, (nuint)c);
+                Avx512F.Compress(Vector512<double>.Zero, keep, vz).StoreUnsafe(ref dzs, (nuint)c);
+                var keepSlots = Avx512F.ConvertToVector256Int32(keep.AsInt64());
+                Avx512F.VL.Compress(Vector256<int>.Zero, keepSlots, Vector256.Create(s) + slotLanes).StoreUnsafe(ref slot, (nuint)c);
+                c += BitOperations.PopCount(keep.ExtractMostSignificantBits());
+            }
+        }
+        return c;
+    }
 
     private void Grow()
     {

@@ -118,8 +118,13 @@ internal sealed class CellBuilder
         _cellDuplicate2 = Math.Min(_duplicate2, _duplicateFraction2 * (gx * gx + gy * gy + gz * gz));
         ClipByShells(slot, self, gx, gy, gz);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
-        cell.BuildFaceRings();
-        Measure(self, gx, gy, gz, faces);
+        // Faces are walked through the cell's edge table; the mass quadrature and cells of over 64 planes use built rings.
+        if (_cells.Mass is null && cell.PrepareFaceWalk()) Measure(cell.Faces, self, gx, gy, gz, faces);
+        else
+        {
+            cell.BuildFaceRings();
+            Measure(cell.FaceRings, self, gx, gy, gz, faces);
+        }
     }
 
     // Neighbours from the grid or the tree in growing shells [r0, r1): the first radius follows the previous cell's
@@ -299,7 +304,8 @@ internal sealed class CellBuilder
             _first = false;
         }
         PlanesTested++;
-        if (_cell.Clip(dx, dy, dz, 0.5 * d2, other)) PlanesCut++;
+        // Callers pass only points closer than twice the farthest vertex (see ClipByShells), so no quick rejection.
+        if (_cell.ClipNear(dx, dy, dz, 0.5 * d2, other)) PlanesCut++;
     }
 
     private static void ThrowDuplicate(int self, int other, double d2, double gx, double gy, double gz) =>
@@ -396,7 +402,8 @@ internal sealed class CellBuilder
 
     private const double OneThird = 1.0 / 3.0;
 
-    private void Measure(int self, double gx, double gy, double gz, FaceBuffer? faces)
+    // Generic over the walk, so each is compiled with its own inlined steps.
+    private void Measure<TWalk>(TWalk walk, int self, double gx, double gy, double gz, FaceBuffer? faces) where TWalk : struct, IFaceWalk
     {
         var cell = _cell;
         int planes = cell.PlaneCount;
@@ -406,26 +413,26 @@ internal sealed class CellBuilder
             _faceArea = new double[m]; _faceH = new double[m];
         }
         var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var dd = cell.D;
-        var start = cell.RingStart; var ring = cell.Ring;
         var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
         double volume = 0, mx = 0, my = 0, mz = 0;
         // Locals, so the stores below do not make the JIT reload the fields.
         var faceArea = _faceArea; var faceH = _faceH;
-        // Rings ordered by BuildFaceRings (in Build), also for the mass quadrature.
         for (int p = 0; p < planes; p++)
         {
-            int s = start[p], e = start[p + 1];
             faceArea[p] = 0;
-            if (e - s < 3) continue;
+            // A fan from the face's first vertex t0 over each further pair (t1, t2); a face of fewer than three vertices
+            // has none and no area.
+            int t0 = walk.Start(p);
+            if (t0 < 0) continue;
+            int t1 = walk.Next();
+            if (t1 < 0) continue;
             double norm = Math.Sqrt(nx[p] * nx[p] + ny[p] * ny[p] + nz[p] * nz[p]);
             double inv = 1.0 / norm;
             double ux = nx[p] * inv, uy = ny[p] * inv, uz = nz[p] * inv;
-            int t0 = ring[s];
             double ax = vx[t0], ay = vy[t0], az = vz[t0];
             double area = 0, cx = 0, cy = 0, cz = 0;
-            for (int k = s + 1; k < e - 1; k++)
+            for (int t2 = walk.Next(); t2 >= 0; t1 = t2, t2 = walk.Next())
             {
-                int t1 = ring[k], t2 = ring[k + 1];
                 double bx = vx[t1] - ax, by = vy[t1] - ay, bz = vz[t1] - az;
                 double qx = vx[t2] - ax, qy = vy[t2] - ay, qz = vz[t2] - az;
                 // Signed area along the face normal (consistent sign for a convex face).

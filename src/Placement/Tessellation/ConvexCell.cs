@@ -2,6 +2,7 @@ using System.Numerics;
 using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
+using Placement.Spatial;
 
 namespace Placement.Tessellation;
 
@@ -127,6 +128,24 @@ internal sealed class ConvexCell
         // Quick rejection: no vertex can lie beyond a plane farther than the farthest vertex.
         double reach = d - eps;
         if (reach > 0 && reach * reach > MaxRadiusSquared * norm * norm) return false;
+        return ClipFrom(nx, ny, nz, d, neighbour, norm, eps);
+    }
+
+    /// <summary>
+    /// <see cref="Clip"/> for a plane the caller already found within reach of the farthest vertex (a bisector whose
+    /// generator lies within twice that distance): no quick rejection, so the square root of the normal's length is not
+    /// waited on before the vertices are classified.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public bool ClipNear(double nx, double ny, double nz, double d, int neighbour)
+    {
+        double norm = Math.Sqrt(nx * nx + ny * ny + nz * nz);
+        return ClipFrom(nx, ny, nz, d, neighbour, norm, Tolerance * norm);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private bool ClipFrom(double nx, double ny, double nz, double d, int neighbour, double norm, double eps)
+    {
         for (int attempt = 0; attempt < 8; attempt++)
         {
             int r = Classify(nx, ny, nz, d + eps);
@@ -209,7 +228,37 @@ internal sealed class ConvexCell
         // Clear every word: triangles appended by the rebuild may land in words beyond the current count.
         for (int w = 0; w < rm.Length; w++) rm[w] = 0;
         bool farthest = false;
-        if (Vector256.IsHardwareAccelerated)
+        int lanes = SimdLanes.Doubles;
+        if (lanes == 8 && Vector512.IsHardwareAccelerated)
+        {
+            var vnx = Vector512.Create(nx); var vny = Vector512.Create(ny); var vnz = Vector512.Create(nz); var vl = Vector512.Create(limit);
+            var vmax = Vector512.Create(MaxRadiusSquared);
+            ref double px = ref MemoryMarshal.GetArrayDataReference(_vx);
+            ref double py = ref MemoryMarshal.GetArrayDataReference(_vy);
+            ref double pz = ref MemoryMarshal.GetArrayDataReference(_vz);
+            ref double pr = ref MemoryMarshal.GetArrayDataReference(_vr2);
+            // As below, eight vertices per step (capacities are multiples of eight).
+            ulong word = 0;
+            ulong farBits = 0;
+            for (; t < count; t += 8)
+            {
+                var dot = vnx * Vector512.LoadUnsafe(ref px, (nuint)t) + vny * Vector512.LoadUnsafe(ref py, (nuint)t) + vnz * Vector512.LoadUnsafe(ref pz, (nuint)t);
+                ulong bits = Vector512.GreaterThan(dot, vl).ExtractMostSignificantBits();
+                int left = count - t;
+                bits &= left >= 8 ? 0xFFUL : (1UL << left) - 1;
+                word |= bits << (t & 63);
+                removed += BitOperations.PopCount(bits);
+                farBits |= Vector512.GreaterThanOrEqual(Vector512.LoadUnsafe(ref pr, (nuint)t), vmax).ExtractMostSignificantBits() & bits;
+                if ((t & 63) == 56)
+                {
+                    rm[t >> 6] = word;
+                    word = 0;
+                }
+            }
+            if ((t & 63) != 0) rm[(t - 1) >> 6] = word;
+            farthest = farBits != 0;
+        }
+        else if (lanes >= 4 && Vector256.IsHardwareAccelerated)
         {
             var vnx = Vector256.Create(nx); var vny = Vector256.Create(ny); var vnz = Vector256.Create(nz); var vl = Vector256.Create(limit);
             var vmax = Vector256.Create(MaxRadiusSquared);
@@ -416,8 +465,30 @@ internal sealed class ConvexCell
             MaxRadiusSquared = Math.Max(oldMax, newMax);
             return true;
         }
-        MaxRadiusSquared = System.Numerics.Tensors.TensorPrimitives.Max<double>(_vr2.AsSpan(0, _triCount));
+        MaxRadiusSquared = LargestVertexRadiusSquared();
         return true;
+    }
+
+    // The largest of _vr2[0 .. _triCount) (all finite and non-negative: the rebuild refuses any other vertex), eight at a
+    // time where the hardware has 512-bit vectors; otherwise the library's reduction. Inline, because half the cuts remove
+    // the farthest vertex and a library call on about twenty values costs more in its set-up than in its loop.
+    private double LargestVertexRadiusSquared()
+    {
+        int count = _triCount;
+        if (SimdLanes.Doubles != 8 || !Vector512.IsHardwareAccelerated) return System.Numerics.Tensors.TensorPrimitives.Max<double>(_vr2.AsSpan(0, count));
+        ref double pr = ref MemoryMarshal.GetArrayDataReference(_vr2);
+        var max = Vector512<double>.Zero;
+        int t = 0;
+        for (; t + 8 <= count; t += 8) max = Vector512.MaxNative(max, Vector512.LoadUnsafe(ref pr, (nuint)t));
+        if (t < count)
+        {
+            // Capacities are multiples of eight: the last group reads a whole vector, lanes past the count set to zero.
+            var keep = Vector512.LessThan(Vector512.Create(0L, 1, 2, 3, 4, 5, 6, 7), Vector512.Create((long)(count - t))).AsDouble();
+            max = Vector512.MaxNative(max, Vector512.ConditionalSelect(keep, Vector512.LoadUnsafe(ref pr, (nuint)t), Vector512<double>.Zero));
+        }
+        var half = Vector256.MaxNative(max.GetLower(), max.GetUpper());
+        var quarter = Vector128.MaxNative(half.GetLower(), half.GetUpper());
+        return Math.Max(quarter.GetElement(0), quarter.GetElement(1));
     }
 
     // Boundary of the removed patch when every plane index fits a 64-bit mask: for each plane x, the removed
@@ -589,37 +660,25 @@ internal sealed class ConvexCell
     private readonly int[] _firstNeighbour = new int[64];
 
     /// <summary>
-    /// Builds every face ring in order: <c>Ring[RingStart[p] .. RingStart[p + 1])</c> lists the triangles (vertices) around
-    /// face p, in the order <see cref="OrderFace"/> gives, starting from the lowest-numbered triangle; faces that vanished
-    /// have an empty ring.
+    /// Prepares <see cref="Faces"/> for cells of at most 64 planes: every directed edge x→y of the dual triangulation is
+    /// entered in a 64 × 64 table with the triangle (x, y, z) holding it and z, so each face is walked one load per
+    /// vertex. Returns false for larger cells, whose rings must be built (<see cref="BuildFaceRings"/>).
     /// </summary>
     /// <remarks>
-    /// In triangle (p, q, r) face p runs from neighbour q to neighbour r, so the next triangle around p is the one holding the
-    /// directed edge p→r. With at most 64 planes every directed edge is entered in a 64 × 64 table with its triangle and
-    /// that triangle's third plane (each edge of a closed triangulation occurs once, so no entry is read stale), and each
-    /// ring is one load per vertex; otherwise the corners are grouped by plane and each face ordered
-    /// (<see cref="GroupFaceCorners"/>, <see cref="OrderFace"/>).
+    /// In triangle (p, q, r) face p runs from neighbour q to neighbour r, so the next triangle around p is the one holding
+    /// the directed edge p→r. Each edge of a closed triangulation occurs once, so no entry is read stale. The table is
+    /// filled backwards, so each face's walk starts at its lowest-numbered triangle.
     /// </remarks>
-    /// <exception cref="InvalidOperationException">A ring does not close (an inconsistent triangulation).</exception>
-    public void BuildFaceRings()
+    public bool PrepareFaceWalk()
     {
         int planes = _planeCount, tris = _triCount;
-        if (planes > 64)
-        {
-            GroupFaceCorners();
-            for (int p = 0; p < planes; p++) OrderFace(p);
-            return;
-        }
-        if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
-        int corners = 3 * tris;
-        if (_ring.Length < corners) Array.Resize(ref _ring, Math.Max(corners, 2 * _ring.Length));
+        if (planes > 64) return false;
         ref int edge = ref MemoryMarshal.GetArrayDataReference(_edgeTriangle);
         ref int firstQ = ref MemoryMarshal.GetArrayDataReference(_firstNeighbour);
         ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
         ref int tb = ref MemoryMarshal.GetArrayDataReference(_tb);
         ref int tc = ref MemoryMarshal.GetArrayDataReference(_tc);
         for (int p = 0; p < planes; p++) Unsafe.Add(ref firstQ, p) = -1;
-        // Backwards, so each plane's ring starts at its lowest-numbered triangle.
         for (int t = tris - 1; t >= 0; t--)
         {
             int a = Unsafe.Add(ref ta, t), b = Unsafe.Add(ref tb, t), c = Unsafe.Add(ref tc, t);
@@ -628,22 +687,39 @@ internal sealed class ConvexCell
             Unsafe.Add(ref edge, (c << 6) | a) = t | (b << 16);
             Unsafe.Add(ref firstQ, a) = b; Unsafe.Add(ref firstQ, b) = c; Unsafe.Add(ref firstQ, c) = a;
         }
+        return true;
+    }
+
+    /// <summary>The faces' vertex walks after <see cref="PrepareFaceWalk"/> returned true.</summary>
+    public EdgeTableWalk Faces => new(_edgeTriangle, _firstNeighbour, _triCount);
+
+    /// <summary>The faces' vertex walks over the rings of <see cref="BuildFaceRings"/>.</summary>
+    public RingWalk FaceRings => new(_ringStart, _ring);
+
+    /// <summary>
+    /// Builds every face ring in order: <c>Ring[RingStart[p] .. RingStart[p + 1])</c> lists the triangles (vertices) around
+    /// face p, in the order of <see cref="Faces"/> (from the lowest-numbered triangle) for cells of at most 64 planes, else
+    /// as <see cref="OrderFace"/> gives; faces that vanished have an empty ring.
+    /// </summary>
+    /// <exception cref="InvalidOperationException">A ring does not close (an inconsistent triangulation).</exception>
+    public void BuildFaceRings()
+    {
+        int planes = _planeCount, tris = _triCount;
+        if (!PrepareFaceWalk())
+        {
+            GroupFaceCorners();
+            for (int p = 0; p < planes; p++) OrderFace(p);
+            return;
+        }
+        if (_ringStart.Length < planes + 1) Array.Resize(ref _ringStart, Math.Max(planes + 1, 2 * _ringStart.Length));
+        if (_ring.Length < 3 * tris) Array.Resize(ref _ring, Math.Max(3 * tris, 2 * _ring.Length));
         var start = _ringStart; var ring = _ring;
+        var walk = Faces;
         int k = 0;
         for (int p = 0; p < planes; p++)
         {
             start[p] = k;
-            int q0 = Unsafe.Add(ref firstQ, p);
-            if (q0 < 0) continue;
-            int q = q0, row = p << 6;
-            do
-            {
-                // The rings of a closed triangulation hold every corner once: more means a ring that does not close.
-                if (k == corners) throw new InvalidOperationException("A face ring of a Voronoi cell does not close (inconsistent triangulation).");
-                int entry = Unsafe.Add(ref edge, row | q);
-                ring[k++] = entry & 0xFFFF;
-                q = entry >> 16;
-            } while (q != q0);
+            for (int t = walk.Start(p); t >= 0; t = walk.Next()) ring[k++] = t;
         }
         start[planes] = k;
     }
@@ -712,4 +788,61 @@ internal sealed class ConvexCell
         Array.Resize(ref _vx, n); Array.Resize(ref _vy, n); Array.Resize(ref _vz, n); Array.Resize(ref _vr2, n);
         Array.Resize(ref _removed, (n + 63) >> 6);
     }
+}
+
+/// <summary>The vertices of one face of a <see cref="ConvexCell"/> in order, one at a time: <c>for (int t = w.Start(p); t &gt;= 0; t = w.Next())</c>.</summary>
+internal interface IFaceWalk
+{
+    /// <summary>The first vertex (triangle) of face <paramref name="p"/>, or −1 if the face vanished.</summary>
+    int Start(int p);
+
+    /// <summary>The next vertex of the face begun by <see cref="Start"/>, or −1 after its last.</summary>
+    int Next();
+}
+
+/// <summary>Walks a face through the directed-edge table of <see cref="ConvexCell.PrepareFaceWalk"/>: one load per vertex.</summary>
+internal struct EdgeTableWalk(int[] edgeTriangle, int[] firstNeighbour, int triangles) : IFaceWalk
+{
+    private int _row, _q0, _q, _left;
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public int Start(int p)
+    {
+        int q0 = firstNeighbour[p];
+        if (q0 < 0) return -1;
+        _row = p << 6;
+        _q0 = q0;
+        // A face has at most as many vertices as the cell: more means a walk that does not close.
+        _left = triangles - 1;
+        int entry = Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(edgeTriangle), _row | q0);
+        _q = entry >> 16;
+        return entry & 0xFFFF;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public int Next()
+    {
+        if (_q == _q0) return -1;
+        if (--_left < 0) throw new InvalidOperationException("A face ring of a Voronoi cell does not close (inconsistent triangulation).");
+        int entry = Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(edgeTriangle), _row | _q);
+        _q = entry >> 16;
+        return entry & 0xFFFF;
+    }
+}
+
+/// <summary>Walks a face through the rings of <see cref="ConvexCell.BuildFaceRings"/>.</summary>
+internal struct RingWalk(int[] ringStart, int[] ring) : IFaceWalk
+{
+    private int _k, _end;
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public int Start(int p)
+    {
+        _k = ringStart[p];
+        _end = ringStart[p + 1];
+        return _k < _end ? ring[_k++] : -1;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public int Next() => _k < _end ? ring[_k++] : -1;
 }

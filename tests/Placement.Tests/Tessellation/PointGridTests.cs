@@ -62,30 +62,28 @@ public class PointGridTests
     }
 
     [Fact]
-    public void CollectInShell_VectorAndScalarAppends_GiveTheBruteForceNeighboursInOneOrder()
+    public void CollectInShell_EveryVectorWidth_GivesTheBruteForceNeighboursInOneOrder()
     {
-        // Every point of a 2000-point set queried (the last grid cells end at the arrays' end, where the vector path
-        // falls back to scalar), shells of growing radii with the query itself excluded: each path must return exactly
-        // the brute-force neighbours (offsets and squared distances bit for bit, computed in the same order), and the
-        // vector path the scalar path's order.
+        // Every point of a 2000-point set queried (the last grid cells end at the arrays' end, where the vector paths
+        // fall back to scalar), shells of growing radii with the query itself excluded: the scalar path must return exactly
+        // the brute-force neighbours (offsets and squared distances bit for bit, computed in the same order), and every
+        // vector width this machine has (4: AVX2 permutations, 8: AVX-512 compress) the scalar path's order.
         var (x, y, z) = TestPoints.Uniform(2000, 71, -1, 1);
         var grid = new PointGrid(x, y, z, (-1, -1, -1), (1, 1, 1), false);
         var sx = grid.SortedX; var sy = grid.SortedY; var sz = grid.SortedZ;
         var scalar = new NeighbourBuffer();
-        var packed = new NeighbourBuffer();
-        bool was = NeighbourBuffer.PackedAppend;
+        var wide = new NeighbourBuffer();
+        int was = SimdLanes.Doubles;
+        int[] widths = SimdLanes.Best switch { 8 => [4, 8], 4 => [4], _ => [] };
         try
         {
             for (int q = 0; q < x.Length; q++)
             {
                 double inner2 = q % 3 == 0 ? 0 : 0.002 * (q % 7), outer2 = inner2 + 0.01 + 0.0001 * (q % 50);
                 double qx = sx[q], qy = sy[q], qz = sz[q];
-                NeighbourBuffer.PackedAppend = false;
+                SimdLanes.Doubles = 1;
                 scalar.Clear();
                 grid.CollectInShell(qx, qy, qz, inner2, outer2, q, scalar);
-                NeighbourBuffer.PackedAppend = System.Runtime.Intrinsics.X86.Avx2.IsSupported;
-                packed.Clear();
-                grid.CollectInShell(qx, qy, qz, inner2, outer2, q, packed);
 
                 var expected = new Dictionary<int, (double D2, double Dx, double Dy, double Dz)>();
                 for (int s = 0; s < x.Length; s++)
@@ -99,16 +97,22 @@ public class PointGridTests
                     Assert.True(expected.TryGetValue(scalar.Slot[k], out var e), $"query {q}: slot {scalar.Slot[k]} is not in the shell");
                     Assert.Equal(e, (scalar.DistanceSquared[k], scalar.Dx[k], scalar.Dy[k], scalar.Dz[k]));
                 }
-                Assert.Equal(scalar.Slot.ToArray(), packed.Slot.ToArray());
-                Assert.Equal(scalar.DistanceSquared.ToArray(), packed.DistanceSquared.ToArray());
-                Assert.Equal(scalar.Dx.ToArray(), packed.Dx.ToArray());
-                Assert.Equal(scalar.Dy.ToArray(), packed.Dy.ToArray());
-                Assert.Equal(scalar.Dz.ToArray(), packed.Dz.ToArray());
+                foreach (int width in widths)
+                {
+                    SimdLanes.Doubles = width;
+                    wide.Clear();
+                    grid.CollectInShell(qx, qy, qz, inner2, outer2, q, wide);
+                    Assert.Equal(scalar.Slot.ToArray(), wide.Slot.ToArray());
+                    Assert.Equal(scalar.DistanceSquared.ToArray(), wide.DistanceSquared.ToArray());
+                    Assert.Equal(scalar.Dx.ToArray(), wide.Dx.ToArray());
+                    Assert.Equal(scalar.Dy.ToArray(), wide.Dy.ToArray());
+                    Assert.Equal(scalar.Dz.ToArray(), wide.Dz.ToArray());
+                }
             }
         }
         finally
         {
-            NeighbourBuffer.PackedAppend = was;
+            SimdLanes.Doubles = was;
         }
     }
 }
