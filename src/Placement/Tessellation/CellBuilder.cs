@@ -457,10 +457,12 @@ internal sealed class CellBuilder
         }
         // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
         double cxr = 0.75 * mx / volume, cyr = 0.75 * my / volume, czr = 0.75 * mz / volume;
-        double minArea = _options.FaceAreaTolerance * Math.Pow(volume, 2.0 / 3.0);
+        double cbrt = Math.Cbrt(volume);
+        double minArea = _options.FaceAreaTolerance * cbrt * cbrt;
         int faceCount = 0;
         bool cut = false;
-        double worst = 0;
+        // The largest √(A_f/π)/h_f over faces between generators, as the largest A_f/h_f² (one square root per cell).
+        double worst2 = 0;
         var neighbour = cell.Neighbour;
         for (int p = 0; p < planes; p++)
         {
@@ -469,12 +471,10 @@ internal sealed class CellBuilder
             faceCount++;
             int code = neighbour[p];
             if (code < 0) cut = true;
-            else
-            {
-                worst = Math.Max(worst, Math.Sqrt(area / Math.PI) / faceH[p]);
-            }
+            else worst2 = Math.Max(worst2, area / (faceH[p] * faceH[p]));
             faces?.Add(code, area);
         }
+        double worst = Math.Sqrt(worst2 / Math.PI);
         var c = _cells;
         c.Volume[self] = volume;
         c.CentroidX[self] = gx + cxr;

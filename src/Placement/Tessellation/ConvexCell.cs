@@ -89,22 +89,28 @@ internal sealed class ConvexCell
         AddPlane(0, 1, 0, hiy, codes[3]);
         AddPlane(0, 0, -1, -loz, codes[4]);
         AddPlane(0, 0, 1, hiz, codes[5]);
-        _triCount = 0;
-        double max = 0;
-        for (int corner = 0; corner < 8; corner++)
-        {
-            int sx = corner & 1, sy = (corner >> 1) & 1, sz = (corner >> 2) & 1;
-            int a = sx, b = 2 + sy, c = 4 + sz;
-            // Orientation: (n_a × n_b)·n_c > 0 seen from outside; the normals' signs multiply.
-            int sign = (sx == 1 ? 1 : -1) * (sy == 1 ? 1 : -1) * (sz == 1 ? 1 : -1);
-            if (sign < 0) (a, b) = (b, a);
-            double x = sx == 1 ? hix : lox, y = sy == 1 ? hiy : loy, z = sz == 1 ? hiz : loz;
-            _ta[_triCount] = a; _tb[_triCount] = b; _tc[_triCount] = c;
-            _vx[_triCount] = x; _vy[_triCount] = y; _vz[_triCount] = z; _vr2[_triCount] = x * x + y * y + z * z;
-            _triCount++;
-            max = Math.Max(max, x * x + y * y + z * z);
-        }
+        // The eight corners, straight-line (a loop choosing each corner's planes and coordinates cost mispredicted branches
+        // on every cell): corner (sx, sy, sz) meets planes sx, 2 + sy, 4 + sz, ordered so that (n_a × n_b)·n_c > 0 seen from
+        // outside (the normals' signs multiply; a negative product swaps a and b).
+        SetCorner(0, 2, 0, 4, lox, loy, loz);
+        SetCorner(1, 1, 2, 4, hix, loy, loz);
+        SetCorner(2, 0, 3, 4, lox, hiy, loz);
+        SetCorner(3, 3, 1, 4, hix, hiy, loz);
+        SetCorner(4, 0, 2, 5, lox, loy, hiz);
+        SetCorner(5, 2, 1, 5, hix, loy, hiz);
+        SetCorner(6, 3, 0, 5, lox, hiy, hiz);
+        SetCorner(7, 1, 3, 5, hix, hiy, hiz);
+        _triCount = 8;
+        double mx = Math.Max(lox * lox, hix * hix), my = Math.Max(loy * loy, hiy * hiy), mz = Math.Max(loz * loz, hiz * hiz);
+        double max = mx + my + mz;
         MaxRadiusSquared = max;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private void SetCorner(int t, int a, int b, int c, double x, double y, double z)
+    {
+        _ta[t] = a; _tb[t] = b; _tc[t] = c;
+        _vx[t] = x; _vy[t] = y; _vz[t] = z; _vr2[t] = x * x + y * y + z * z;
     }
 
     private int AddPlane(double nx, double ny, double nz, double d, int neighbour)
@@ -423,6 +429,9 @@ internal sealed class ConvexCell
         // a new vertex, and the full rescan below is skipped.
         double oldMax = MaxRadiusSquared, newMax = 0;
         bool farthestRemoved = _farthestRemoved;
+        // Otherwise the largest kept vertex, found before the new vertices are written over removed slots (a vector read of
+        // values just stored one by one would wait for the stores).
+        if (farthestRemoved) oldMax = KeptVertexRadiusSquared();
         // Fill removed slots with the new triangles (x, next[x], p), append the rest (capacity ensured first, so the
         // references below stay valid).
         while (_triCount + boundary > _ta.Length) GrowTriangles();
@@ -460,31 +469,34 @@ internal sealed class ConvexCell
             }
             _triCount = write;
         }
-        if (!farthestRemoved)
-        {
-            MaxRadiusSquared = Math.Max(oldMax, newMax);
-            return true;
-        }
-        MaxRadiusSquared = LargestVertexRadiusSquared();
+        MaxRadiusSquared = Math.Max(oldMax, newMax);
         return true;
     }
 
-    // The largest of _vr2[0 .. _triCount) (all finite and non-negative: the rebuild refuses any other vertex), eight at a
-    // time where the hardware has 512-bit vectors; otherwise the library's reduction. Inline, because half the cuts remove
-    // the farthest vertex and a library call on about twenty values costs more in its set-up than in its loop.
-    private double LargestVertexRadiusSquared()
+    // The largest _vr2 of the vertices Classify kept (all finite and non-negative: the rebuild refuses any other vertex),
+    // eight at a time where the hardware has 512-bit vectors. Half the cuts remove the farthest vertex.
+    private double KeptVertexRadiusSquared()
     {
         int count = _triCount;
-        if (SimdLanes.Doubles != 8 || !Vector512.IsHardwareAccelerated) return System.Numerics.Tensors.TensorPrimitives.Max<double>(_vr2.AsSpan(0, count));
+        var removed = _removed;
         ref double pr = ref MemoryMarshal.GetArrayDataReference(_vr2);
-        var max = Vector512<double>.Zero;
-        int t = 0;
-        for (; t + 8 <= count; t += 8) max = Vector512.MaxNative(max, Vector512.LoadUnsafe(ref pr, (nuint)t));
-        if (t < count)
+        if (SimdLanes.Doubles != 8 || !Vector512.IsHardwareAccelerated)
         {
-            // Capacities are multiples of eight: the last group reads a whole vector, lanes past the count set to zero.
-            var keep = Vector512.LessThan(Vector512.Create(0L, 1, 2, 3, 4, 5, 6, 7), Vector512.Create((long)(count - t))).AsDouble();
-            max = Vector512.MaxNative(max, Vector512.ConditionalSelect(keep, Vector512.LoadUnsafe(ref pr, (nuint)t), Vector512<double>.Zero));
+            double best = 0;
+            for (int k = 0; k < count; k++)
+                if ((removed[k >> 6] & (1UL << (k & 63))) == 0) best = Math.Max(best, Unsafe.Add(ref pr, k));
+            return best;
+        }
+        var lanes = Vector512.Create(1L, 2, 4, 8, 16, 32, 64, 128);
+        var max = Vector512<double>.Zero;
+        for (int t = 0; t < count; t += 8)
+        {
+            // Lanes kept and below the count (capacities are multiples of eight: the last group reads a whole vector).
+            long keep = (long)(~(removed[t >> 6] >> (t & 63)) & 0xFF);
+            int left = count - t;
+            if (left < 8) keep &= (1L << left) - 1;
+            var mask = Vector512.Equals(Vector512.Create(keep) & lanes, lanes).AsDouble();
+            max = Vector512.MaxNative(max, Vector512.ConditionalSelect(mask, Vector512.LoadUnsafe(ref pr, (nuint)t), Vector512<double>.Zero));
         }
         var half = Vector256.MaxNative(max.GetLower(), max.GetUpper());
         var quarter = Vector128.MaxNative(half.GetLower(), half.GetUpper());
