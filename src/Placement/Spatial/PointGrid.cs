@@ -67,13 +67,14 @@ public sealed class PointGrid
 
         int cellCount = CountX * CountY * CountZ;
         _max = max;
-        CellStart = new int[cellCount + 1];
-        SortedIndex = new int[n];
-        SortedX = new double[n];
-        SortedY = new double[n];
-        SortedZ = new double[n];
-        _cellOf = new int[n];
-        _fill = new int[cellCount];
+        // Not cleared here: Update clears the counts and writes every slot.
+        CellStart = GC.AllocateUninitializedArray<int>(cellCount + 1);
+        SortedIndex = GC.AllocateUninitializedArray<int>(n);
+        SortedX = GC.AllocateUninitializedArray<double>(n);
+        SortedY = GC.AllocateUninitializedArray<double>(n);
+        SortedZ = GC.AllocateUninitializedArray<double>(n);
+        _cellOf = GC.AllocateUninitializedArray<int>(n);
+        _fill = GC.AllocateUninitializedArray<int>(cellCount);
         Update(x, y, z);
         _offsets = OffsetTable.For(Math.Max(CountX, Math.Max(CountY, CountZ)), periodic);
     }

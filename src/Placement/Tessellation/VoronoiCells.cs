@@ -23,15 +23,17 @@ public sealed class VoronoiCells
     {
         Count = count;
         Domain = domain;
-        Volume = new double[count];
-        CentroidX = new double[count];
-        CentroidY = new double[count];
-        CentroidZ = new double[count];
-        FaceCount = new int[count];
-        CentroidOffset = new double[count];
-        MaxFaceAngleRatio = new double[count];
-        CutByDomain = new bool[count];
-        Mass = masses ? new double[count] : null;
+        // Not cleared: every cell's builder writes each of these (a tessellation that fails returns no cells, and the
+        // tessellator that owns them rewrites all before returning them again).
+        Volume = GC.AllocateUninitializedArray<double>(count);
+        CentroidX = GC.AllocateUninitializedArray<double>(count);
+        CentroidY = GC.AllocateUninitializedArray<double>(count);
+        CentroidZ = GC.AllocateUninitializedArray<double>(count);
+        FaceCount = GC.AllocateUninitializedArray<int>(count);
+        CentroidOffset = GC.AllocateUninitializedArray<double>(count);
+        MaxFaceAngleRatio = GC.AllocateUninitializedArray<double>(count);
+        CutByDomain = GC.AllocateUninitializedArray<bool>(count);
+        Mass = masses ? GC.AllocateUninitializedArray<double>(count) : null;
         if (keepFaces) FaceStart = new int[count + 1];
     }
 

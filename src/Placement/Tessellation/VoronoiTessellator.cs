@@ -75,7 +75,7 @@ public sealed class VoronoiTessellator
         {
             _grid = new PointGrid(x, y, z, (domain.MinX, domain.MinY, domain.MinZ), (domain.MaxX, domain.MaxY, domain.MaxZ),
                 domain.Kind == DomainKind.PeriodicBox, options.PointsPerGridCell);
-            _order = new int[n];
+            _order = GC.AllocateUninitializedArray<int>(n); // filled before use
         }
         else
         {
