@@ -223,9 +223,9 @@ internal sealed class ConvexCell
         return false;
     }
 
-    // Marks vertices with n·v > limit in the bit words _removed and returns how many; four vertices per step with SIMD.
-    // Also notes whether a removed vertex is a farthest one (_farthestRemoved), so the rebuild knows if the maximum
-    // radius must be rescanned.
+    // Marks vertices with n·v > limit in the bit words _removed and returns how many; eight (AVX-512) or four (AVX2)
+    // vertices per step, as SimdLanes.Doubles says. Also notes whether a removed vertex is a farthest one
+    // (_farthestRemoved), so the rebuild knows the maximum radius must be found again among the kept vertices.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private int Classify(double nx, double ny, double nz, double limit)
     {
