@@ -118,8 +118,9 @@ internal sealed class CellBuilder
         _cellDuplicate2 = Math.Min(_duplicate2, _duplicateFraction2 * (gx * gx + gy * gy + gz * gz));
         ClipByShells(slot, self, gx, gy, gz);
         if (d.Kind == DomainKind.Sphere) ClipToSphere(gx, gy, gz, _options.SphereTolerance);
-        // Faces are walked through the cell's edge table; the mass quadrature and cells of over 64 planes use built rings.
-        if (_cells.Mass is null && cell.PrepareFaceWalk()) Measure(cell.Faces, self, gx, gy, gz, faces);
+        // Volume, centroid and face areas from the corners of the cell's edge table (independent of each other, no face walked
+        // in order); the mass quadrature and cells of over 64 planes use built rings.
+        if (_cells.Mass is null && cell.PrepareFaceWalk()) MeasureByCorners(self, gx, gy, gz, faces);
         else
         {
             cell.BuildFaceRings();
@@ -456,7 +457,31 @@ internal sealed class CellBuilder
             faceH[p] = h;
         }
         // Pyramid over face f with apex at the generator (origin): centroid ¾ c_f.
-        double cxr = 0.75 * mx / volume, cyr = 0.75 * my / volume, czr = 0.75 * mz / volume;
+        Finish(self, gx, gy, gz, faces, volume, 0.75 * mx / volume, 0.75 * my / volume, 0.75 * mz / volume);
+    }
+
+    // Volume and centroid from the corner tetrahedra (ConvexCell.MeasureByCorners), face areas from the same sums.
+    private void MeasureByCorners(int self, double gx, double gy, double gz, FaceBuffer? faces)
+    {
+        var cell = _cell;
+        int planes = cell.PlaneCount;
+        if (_faceArea.Length < planes)
+        {
+            // A multiple of eight, for MeasureByCorners' whole vectors.
+            int m = (Math.Max(planes, 2 * _faceArea.Length) + 7) & ~7;
+            _faceArea = new double[m]; _faceH = new double[m];
+        }
+        var faceArea = _faceArea; var faceH = _faceH;
+        double volume = cell.MeasureByCorners(faceArea, faceH, out double mx, out double my, out double mz);
+        // The corner sums carry the orientation's sign; the centroid, a ratio of two of them, does not.
+        Finish(self, gx, gy, gz, faces, Math.Abs(volume), mx / volume, my / volume, mz / volume);
+    }
+
+    private void Finish(int self, double gx, double gy, double gz, FaceBuffer? faces, double volume, double cxr, double cyr, double czr)
+    {
+        var cell = _cell;
+        int planes = cell.PlaneCount;
+        var faceArea = _faceArea; var faceH = _faceH;
         double cbrt = Math.Cbrt(volume);
         double minArea = _options.FaceAreaTolerance * cbrt * cbrt;
         int faceCount = 0;

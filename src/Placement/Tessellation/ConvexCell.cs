@@ -702,6 +702,100 @@ internal sealed class ConvexCell
         return true;
     }
 
+    private double[] _planeK = new double[64];
+
+    /// <summary>
+    /// After <see cref="PrepareFaceWalk"/> returned true: the cell's signed volume (returned) and first moment about the
+    /// generator (<paramref name="mx"/>, <paramref name="my"/>, <paramref name="mz"/>, signed alike, so their ratio is
+    /// the centroid), each face's area and the generator's distance from its plane (<paramref name="faceArea"/>,
+    /// <paramref name="faceHeight"/>, indexed by plane; a face that vanished has area 0).
+    /// </summary>
+    /// <remarks>
+    /// Each corner of a vertex t on face p (the edge from t to the next vertex around p, found in the edge table) spans the
+    /// signed tetrahedron (0, f_p, v_t, v_next), f_p = n_p d_p/|n_p|² the generator's foot on the plane: volume
+    /// f_p·(v_t × v_next)/6, centroid (f_p + v_t + v_next)/4, and n_p·(v_t × v_next) summed over a face's corners is
+    /// twice its area times |n_p| (the foot drops out: it is parallel to n_p). The fans from the feet cover each face and
+    /// pyramid exactly with signs, so the sums are exact integrals; no face is walked in order, so the corners are
+    /// independent of each other (a walk waits on one load per vertex and mispredicts each face's end).
+    /// </remarks>
+    public double MeasureByCorners(double[] faceArea, double[] faceHeight, out double mx, out double my, out double mz)
+    {
+        int planes = _planeCount, tris = _triCount;
+        if (_planeK.Length < _nx.Length) _planeK = new double[_nx.Length];
+        ref double k = ref MemoryMarshal.GetArrayDataReference(_planeK);
+        ref double pnx = ref MemoryMarshal.GetArrayDataReference(_nx);
+        ref double pny = ref MemoryMarshal.GetArrayDataReference(_ny);
+        ref double pnz = ref MemoryMarshal.GetArrayDataReference(_nz);
+        ref double pd = ref MemoryMarshal.GetArrayDataReference(_d);
+        ref double pn2 = ref MemoryMarshal.GetArrayDataReference(_n2);
+        if (faceArea.Length < planes || faceHeight.Length < planes) throw new ArgumentException("Face arrays shorter than the plane count.");
+        ref double sum = ref MemoryMarshal.GetArrayDataReference(faceArea);
+        ref double h = ref MemoryMarshal.GetArrayDataReference(faceHeight);
+        int p0 = 0;
+        if (Vector512.IsHardwareAccelerated && (faceArea.Length & 7) == 0 && (faceHeight.Length & 7) == 0)
+        {
+            // Whole vectors: every capacity here is a multiple of eight; lanes past the plane count are never read.
+            for (; p0 < planes; p0 += 8)
+            {
+                var n2 = Vector512.LoadUnsafe(ref pn2, (nuint)p0); var d = Vector512.LoadUnsafe(ref pd, (nuint)p0);
+                (d / n2).StoreUnsafe(ref k, (nuint)p0);
+                (d / Vector512.Sqrt(n2)).StoreUnsafe(ref h, (nuint)p0);
+                Vector512<double>.Zero.StoreUnsafe(ref sum, (nuint)p0);
+            }
+        }
+        for (int p = p0; p < planes; p++)
+        {
+            double n2 = Unsafe.Add(ref pn2, p), d = Unsafe.Add(ref pd, p);
+            Unsafe.Add(ref k, p) = d / n2;
+            Unsafe.Add(ref h, p) = d / Math.Sqrt(n2);
+            Unsafe.Add(ref sum, p) = 0;
+        }
+        ref int edge = ref MemoryMarshal.GetArrayDataReference(_edgeTriangle);
+        ref int ta = ref MemoryMarshal.GetArrayDataReference(_ta);
+        ref int tb = ref MemoryMarshal.GetArrayDataReference(_tb);
+        ref int tc = ref MemoryMarshal.GetArrayDataReference(_tc);
+        ref double vx = ref MemoryMarshal.GetArrayDataReference(_vx);
+        ref double vy = ref MemoryMarshal.GetArrayDataReference(_vy);
+        ref double vz = ref MemoryMarshal.GetArrayDataReference(_vz);
+        double vol = 0, sx = 0, sy = 0, sz = 0;
+        for (int t = 0; t < tris; t++)
+        {
+            int a = Unsafe.Add(ref ta, t), b = Unsafe.Add(ref tb, t), c = Unsafe.Add(ref tc, t);
+            double x = Unsafe.Add(ref vx, t), y = Unsafe.Add(ref vy, t), z = Unsafe.Add(ref vz, t);
+            // Face a runs from t to the vertex holding a→c, face b to the one holding b→a, face c to the one holding c→b:
+            // (p, q) = (a, c), (b, a), (c, b), each step (p, q, r) ← (r, p, q).
+            int p = a, q = c, r = b;
+            for (int corner = 0; corner < 3; corner++)
+            {
+                int u = Unsafe.Add(ref edge, (p << 6) | q) & 0xFFFF;
+                double wx = Unsafe.Add(ref vx, u), wy = Unsafe.Add(ref vy, u), wz = Unsafe.Add(ref vz, u);
+                double nx = Unsafe.Add(ref pnx, p), ny = Unsafe.Add(ref pny, p), nz = Unsafe.Add(ref pnz, p), kp = Unsafe.Add(ref k, p);
+                double e = nx * (y * wz - z * wy) + ny * (z * wx - x * wz) + nz * (x * wy - y * wx);
+                Unsafe.Add(ref sum, p) += e;
+                double ve = kp * e;
+                vol += ve;
+                sx += ve * (kp * nx + x + wx);
+                sy += ve * (kp * ny + y + wy);
+                sz += ve * (kp * nz + z + wz);
+                (p, q, r) = (r, p, q);
+            }
+        }
+        // Area ½|e sum|/|n| = ½|e sum| h/d (h = d/|n|).
+        p0 = 0;
+        if (Vector512.IsHardwareAccelerated && (faceArea.Length & 7) == 0 && (faceHeight.Length & 7) == 0)
+        {
+            for (; p0 < planes; p0 += 8)
+            {
+                var area = Vector512.Abs(Vector512.LoadUnsafe(ref sum, (nuint)p0)) * Vector512.LoadUnsafe(ref h, (nuint)p0) / Vector512.LoadUnsafe(ref pd, (nuint)p0);
+                (Vector512.Create(0.5) * area).StoreUnsafe(ref sum, (nuint)p0);
+            }
+        }
+        for (int p = p0; p < planes; p++) Unsafe.Add(ref sum, p) = 0.5 * Math.Abs(Unsafe.Add(ref sum, p)) * Unsafe.Add(ref h, p) / Unsafe.Add(ref pd, p);
+        // Tetrahedron volume det(f, v, w)/6 = k e/6, centroid (f + v + w)/4.
+        mx = sx / 24; my = sy / 24; mz = sz / 24;
+        return vol / 6;
+    }
+
     /// <summary>The faces' vertex walks after <see cref="PrepareFaceWalk"/> returned true.</summary>
     public EdgeTableWalk Faces => new(_edgeTriangle, _firstNeighbour, _triCount);
 
