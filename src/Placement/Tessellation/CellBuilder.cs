@@ -298,15 +298,16 @@ internal sealed class CellBuilder
     private void ClipBy(double dx, double dy, double dz, double d2, int self, int other, double gx, double gy, double gz)
     {
         if (d2 <= _cellDuplicate2) ThrowDuplicate(self, other, d2, gx, gy, gz);
+        double distance = Math.Sqrt(d2);
         if (_first)
         {
             // Tolerance from the first (near-nearest) neighbour: rounding scales with the cell size.
-            _cell.Tolerance = _options.ClipTolerance * Math.Sqrt(d2);
+            _cell.Tolerance = _options.ClipTolerance * distance;
             _first = false;
         }
         PlanesTested++;
         // Callers pass only points closer than twice the farthest vertex (see ClipByShells), so no quick rejection.
-        if (_cell.ClipNear(dx, dy, dz, 0.5 * d2, other)) PlanesCut++;
+        if (_cell.ClipNear(dx, dy, dz, 0.5 * d2, other, distance)) PlanesCut++;
     }
 
     private static void ThrowDuplicate(int self, int other, double d2, double gx, double gy, double gz) =>

@@ -140,12 +140,12 @@ internal sealed class ConvexCell
     /// <summary>
     /// <see cref="Clip"/> for a plane the caller already found within reach of the farthest vertex (a bisector whose
     /// generator lies within twice that distance): no quick rejection, so the square root of the normal's length is not
-    /// waited on before the vertices are classified.
+    /// waited on before the vertices are classified. The caller passes that length, <paramref name="norm"/> = |n| (a
+    /// bisector's normal is the neighbour's offset, whose squared length the gather already holds).
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public bool ClipNear(double nx, double ny, double nz, double d, int neighbour)
+    public bool ClipNear(double nx, double ny, double nz, double d, int neighbour, double norm)
     {
-        double norm = Math.Sqrt(nx * nx + ny * ny + nz * nz);
         return ClipFrom(nx, ny, nz, d, neighbour, norm, Tolerance * norm);
     }
 
