@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using Placement.Spatial;
 
 namespace Placement.Tessellation;
@@ -335,14 +336,25 @@ internal sealed class CellBuilder
         if (_order.Length < n) { _order = new int[Math.Max(n, 2 * _order.Length)]; _bucketOf = new int[_order.Length]; }
     }
 
-    // Counting sort of 0 … n−1 by _bucketOf (values 0 … Buckets), stable within a bucket.
+    // Counting sort of 0 … n−1 by _bucketOf (values 0 … Buckets, as both orders write them; n within the arrays, see
+    // EnsureOrder), stable within a bucket. The starts are summed in a register: summed in place, each step waited on the
+    // store of the one before.
     private ReadOnlySpan<int> BucketOrder(int n)
     {
-        Span<int> start = stackalloc int[Buckets + 2];
+        Span<int> start = stackalloc int[Buckets + 1];
         start.Clear();
-        for (int i = 0; i < n; i++) start[_bucketOf[i] + 1]++;
-        for (int k = 0; k <= Buckets; k++) start[k + 1] += start[k];
-        for (int i = 0; i < n; i++) _order[start[_bucketOf[i]]++] = i;
+        ref int first = ref MemoryMarshal.GetReference(start);
+        ref int bucketOf = ref MemoryMarshal.GetArrayDataReference(_bucketOf);
+        ref int order = ref MemoryMarshal.GetArrayDataReference(_order);
+        for (int i = 0; i < n; i++) Unsafe.Add(ref first, Unsafe.Add(ref bucketOf, i))++;
+        int run = 0;
+        for (int k = 0; k <= Buckets; k++)
+        {
+            int count = Unsafe.Add(ref first, k);
+            Unsafe.Add(ref first, k) = run;
+            run += count;
+        }
+        for (int i = 0; i < n; i++) Unsafe.Add(ref order, Unsafe.Add(ref first, Unsafe.Add(ref bucketOf, i))++) = i;
         return _order.AsSpan(0, n);
     }
 
