@@ -83,6 +83,44 @@ internal sealed class CellBuilder
         _lastSecurity = 0;
         PlanesTested = 0;
         PlanesCut = 0;
+        _staged = 0;
+    }
+
+    /// <summary>Writes the chunk's last staged results to the result arrays; call after its last <see cref="Build"/>.</summary>
+    public void EndChunk() => Flush();
+
+    // A cell's results, staged in processing order and written to the result arrays (indexed by the generator's input
+    // index, in no spatial order) StageSize at a time: written from inside the cell loop, those scattered stores cost
+    // 5 % of the time at 1e6 points; in a tight loop of their own their misses overlap.
+    private struct StagedCell
+    {
+        public int Self, FaceCount;
+        public bool Cut;
+        public double Volume, CentroidX, CentroidY, CentroidZ, CentroidOffset, MaxFaceAngleRatio;
+    }
+
+    private const int StageSize = 512;
+    private readonly StagedCell[] _stage = new StagedCell[StageSize];
+    private int _staged;
+
+    private void Flush()
+    {
+        var c = _cells;
+        var volume = c.Volume; var cx = c.CentroidX; var cy = c.CentroidY; var cz = c.CentroidZ;
+        var offset = c.CentroidOffset; var faceCount = c.FaceCount; var ratio = c.MaxFaceAngleRatio; var cut = c.CutByDomain;
+        var stage = _stage;
+        for (int k = 0; k < _staged; k++)
+        {
+            ref readonly var r = ref stage[k];
+            int i = r.Self;
+            volume[i] = r.Volume;
+            cx[i] = r.CentroidX; cy[i] = r.CentroidY; cz[i] = r.CentroidZ;
+            offset[i] = r.CentroidOffset;
+            faceCount[i] = r.FaceCount;
+            ratio[i] = r.MaxFaceAngleRatio;
+            cut[i] = r.Cut;
+        }
+        _staged = 0;
     }
 
     public long PlanesTested { get; private set; }
@@ -514,14 +552,17 @@ internal sealed class CellBuilder
         }
         double worst = Math.Sqrt(worst2 / Math.PI);
         var c = _cells;
-        c.Volume[self] = volume;
-        c.CentroidX[self] = gx + cxr;
-        c.CentroidY[self] = gy + cyr;
-        c.CentroidZ[self] = gz + czr;
-        c.CentroidOffset[self] = Math.Sqrt(cxr * cxr + cyr * cyr + czr * czr);
-        c.FaceCount[self] = faceCount;
-        c.MaxFaceAngleRatio[self] = worst;
-        c.CutByDomain[self] = cut;
+        if (_staged == StageSize) Flush();
+        ref var r = ref _stage[_staged++];
+        r.Self = self;
+        r.Volume = volume;
+        r.CentroidX = gx + cxr;
+        r.CentroidY = gy + cyr;
+        r.CentroidZ = gz + czr;
+        r.CentroidOffset = Math.Sqrt(cxr * cxr + cyr * cyr + czr * czr);
+        r.FaceCount = faceCount;
+        r.MaxFaceAngleRatio = worst;
+        r.Cut = cut;
         if (c.Mass is not null)
             c.Mass[self] = CellMassQuadrature.CellMass(cell, gx, gy, gz, _options.MassProfile!, _options.MassQuadratureAngle);
     }

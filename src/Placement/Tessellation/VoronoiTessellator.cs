@@ -128,6 +128,7 @@ public sealed class VoronoiTessellator
                             $"Voronoi cell of generator {i} at ({x[i]:R}, {y[i]:R}, {z[i]:R}): {e.Message}", e);
                     }
                 }
+                worker.EndChunk();
                 if (chunkFaces is not null) chunkFaces[start / chunk] = faces!;
                 Interlocked.Add(ref tested, worker.PlanesTested);
                 Interlocked.Add(ref cut, worker.PlanesCut);
