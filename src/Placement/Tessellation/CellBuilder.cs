@@ -459,11 +459,7 @@ internal sealed class CellBuilder
     {
         var cell = _cell;
         int planes = cell.PlaneCount;
-        if (_faceArea.Length < planes)
-        {
-            int m = Math.Max(planes, 2 * _faceArea.Length);
-            _faceArea = new double[m]; _faceH = new double[m];
-        }
+        EnsureFaceScratch(planes);
         var nx = cell.Nx; var ny = cell.Ny; var nz = cell.Nz; var dd = cell.D;
         var vx = cell.Vx; var vy = cell.Vy; var vz = cell.Vz;
         double volume = 0, mx = 0, my = 0, mz = 0;
@@ -511,17 +507,21 @@ internal sealed class CellBuilder
         Finish(self, gx, gy, gz, faces, volume, 0.75 * mx / volume, 0.75 * my / volume, 0.75 * mz / volume);
     }
 
+    // Per-face scratch for at least `planes` faces, grown to a multiple of eight (MeasureByCorners' whole vectors; a length
+    // left otherwise by the ring path would send every later cell of this worker down the scalar loops).
+    private void EnsureFaceScratch(int planes)
+    {
+        if (_faceArea.Length >= planes) return;
+        int m = (Math.Max(planes, 2 * _faceArea.Length) + 7) & ~7;
+        _faceArea = new double[m]; _faceH = new double[m];
+    }
+
     // Volume and centroid from the corner tetrahedra (ConvexCell.MeasureByCorners), face areas from the same sums.
     private void MeasureByCorners(int self, double gx, double gy, double gz, FaceBuffer? faces)
     {
         var cell = _cell;
         int planes = cell.PlaneCount;
-        if (_faceArea.Length < planes)
-        {
-            // A multiple of eight, for MeasureByCorners' whole vectors.
-            int m = (Math.Max(planes, 2 * _faceArea.Length) + 7) & ~7;
-            _faceArea = new double[m]; _faceH = new double[m];
-        }
+        EnsureFaceScratch(planes);
         var faceArea = _faceArea; var faceH = _faceH;
         double volume = cell.MeasureByCorners(faceArea, faceH, out double mx, out double my, out double mz);
         // The corner sums carry the orientation's sign; the centroid, a ratio of two of them, does not.
